@@ -1,0 +1,2 @@
+/** Positions in programme files, shared by every layer that reports on them. */
+package dev.mesolint.core.source;

@@ -1,0 +1,71 @@
+package dev.mesolint.core.value;
+
+import java.time.Duration;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Reads rest and other durations: {@code 90s}, {@code 2min}, {@code 2.5min}, {@code 2:30}.
+ *
+ * <p>A bare number is refused on purpose: {@code rest: 2} could mean seconds or minutes.
+ */
+public final class Durations {
+    public static final String HINT = "write a duration with its unit: 90s, 2min, 2.5min or 2:30";
+    /** One hour: longer rests are almost certainly a typo (e.g. 90min for 90s). */
+    public static final Duration MAX = Duration.ofHours(1);
+
+    private static final Pattern SECONDS = Pattern.compile("(\\d+(?:\\.\\d+)?)\\s*s");
+    private static final Pattern MINUTES = Pattern.compile("(\\d+(?:\\.\\d+)?)\\s*min");
+    private static final Pattern CLOCK = Pattern.compile("(\\d+):(\\d{2})");
+
+    private Durations() {
+    }
+
+    public static Duration parse(String text) throws InvalidValueException {
+        String s = text == null ? "" : text.trim().toLowerCase(java.util.Locale.ROOT);
+        Duration result;
+        Matcher m;
+        if ((m = SECONDS.matcher(s)).matches()) {
+            result = ofSeconds(Double.parseDouble(m.group(1)));
+        } else if ((m = MINUTES.matcher(s)).matches()) {
+            result = ofSeconds(Double.parseDouble(m.group(1)) * 60);
+        } else if ((m = CLOCK.matcher(s)).matches()) {
+            int seconds = Integer.parseInt(m.group(2));
+            if (seconds >= 60) {
+                throw new InvalidValueException("'" + text + "' has " + seconds + " seconds after the colon",
+                        "seconds after the colon run from 00 to 59, e.g. 2:30");
+            }
+            result = Duration.ofSeconds(Long.parseLong(m.group(1)) * 60 + seconds);
+        } else if (s.matches("\\d+(\\.\\d+)?")) {
+            throw new InvalidValueException("'" + text + "' has no unit", "write " + s + "s or " + s + "min");
+        } else {
+            throw new InvalidValueException("'" + text + "' is not a duration", HINT);
+        }
+        if (result.compareTo(MAX) > 0) {
+            throw new InvalidValueException("'" + text + "' is longer than one hour", "check the unit: 90s, not 90min");
+        }
+        return result;
+    }
+
+    private static Duration ofSeconds(double seconds) {
+        return Duration.ofMillis(Math.round(seconds * 1000));
+    }
+
+    /** Seconds as a decimal number, for the training model. */
+    public static double seconds(Duration d) {
+        return d.toMillis() / 1000.0;
+    }
+
+    /** A short human form: {@code 75 s}, {@code 2 min}, {@code 2.5 min}. */
+    public static String format(Duration d) {
+        double s = seconds(d);
+        if (s < 120 && s % 60 != 0) {
+            return trim(s) + " s";
+        }
+        return trim(s / 60) + " min";
+    }
+
+    static String trim(double v) {
+        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(Math.round(v * 100) / 100.0);
+    }
+}
