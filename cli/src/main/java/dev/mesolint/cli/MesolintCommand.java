@@ -1,0 +1,54 @@
+package dev.mesolint.cli;
+
+import dev.mesolint.core.Mesolint;
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code mesolint} command: checks training programmes written in YAML. */
+@Command(name = "mesolint",
+        mixinStandardHelpOptions = true,
+        versionProvider = MesolintCommand.Version.class,
+        description = "Checks resistance-training programmes written in YAML the way a compiler checks code.",
+        footer = {"", "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage or internal error.", "",
+            "Caution: " + Mesolint.CAUTION},
+        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class})
+public final class MesolintCommand implements Runnable {
+    static final int EXIT_USAGE = 2;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    public static void main(String[] args) {
+        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line with the given streams; returns the exit code. */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cli = new CommandLine(new MesolintCommand());
+        cli.setOut(out);
+        cli.setErr(err);
+        cli.setCaseInsensitiveEnumValuesAllowed(true);
+        cli.setExitCodeExceptionMapper(e -> EXIT_USAGE);
+        cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
+            // No stack traces for users: one line with the cause, exit 2.
+            commandLine.getErr().println("mesolint: " + e.getClass().getSimpleName()
+                    + (e.getMessage() == null ? "" : ": " + e.getMessage()));
+            return EXIT_USAGE;
+        });
+        return cli.execute(args);
+    }
+
+    /** Reads the version from the core jar. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"mesolint " + Mesolint.version(), "Java " + System.getProperty("java.version")};
+        }
+    }
+}

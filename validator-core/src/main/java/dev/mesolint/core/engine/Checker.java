@@ -1,0 +1,150 @@
+package dev.mesolint.core.engine;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.CatalogueFile;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.format.CatalogueReader;
+import dev.mesolint.core.format.FormatSchema;
+import dev.mesolint.core.format.ProgrammeBinder;
+import dev.mesolint.core.format.Violation;
+import dev.mesolint.core.programme.Programme;
+import dev.mesolint.core.rule.FileScope;
+import dev.mesolint.core.rule.Rule;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rules.InternalErrorRule;
+import dev.mesolint.core.rules.SchemaRule;
+import dev.mesolint.core.rules.YamlSyntaxRule;
+import dev.mesolint.core.source.Location;
+import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.LocatedYamlReader;
+import dev.mesolint.core.yaml.YamlProblem;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Checks programme files: read safely, validate against the schema, bind, expand weeks, run the rules.
+ *
+ * <p>Built once per run (the schemas are compiled and the catalogue read here), then thread-safe: files are checked
+ * in parallel, each in its own {@link FileScope}. A file that fails in any way is reported and never stops the others.
+ */
+public final class Checker {
+    private final CheckRequest request;
+    private final LocatedYamlReader reader;
+    private final FormatSchema programmeSchema;
+    private final Catalogue catalogue;
+    private final List<FileReport> catalogueReports;
+    private final List<RuleDefinition> rules;
+
+    public Checker(CheckRequest request, List<RuleDefinition> rules) {
+        this.request = request;
+        this.rules = List.copyOf(rules);
+        this.reader = new LocatedYamlReader(request.limits());
+        this.programmeSchema = FormatSchema.load(FormatSchema.PROGRAMME);
+        CatalogueReader catalogues = new CatalogueReader(reader, FormatSchema.load(FormatSchema.CATALOGUE));
+        Catalogue combined = catalogues.builtIn();
+        List<FileReport> problems = new ArrayList<>();
+        for (Path extra : request.extraCatalogues()) {
+            String shown = ProgrammeFiles.display(request.root(), extra);
+            CatalogueFile file = catalogues.read(extra, shown);
+            if (file.ok()) {
+                combined = combined.overlay(file.entries());
+            } else {
+                problems.add(violationReport(shown, null, file.ruleId(), file.violations()));
+            }
+        }
+        this.catalogue = combined;
+        this.catalogueReports = List.copyOf(problems);
+    }
+
+    public Catalogue catalogue() {
+        return catalogue;
+    }
+
+    /** Checks every programme file found under {@code request.inputs()}. */
+    public RunReport run() {
+        List<Path> missing = new ArrayList<>();
+        List<Path> files = ProgrammeFiles.discover(request.inputs(), missing);
+        List<FileReport> reports = new ArrayList<>(catalogueReports);
+        reports.addAll(files.parallelStream().map(this::checkSafely).toList());
+        return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
+    }
+
+    private FileReport checkSafely(Path file) {
+        String shown = ProgrammeFiles.display(request.root(), file);
+        try {
+            return check(file, shown);
+        } catch (RuntimeException | StackOverflowError e) {
+            String cause = e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
+            return violationReport(shown, null, InternalErrorRule.ID, List.of(new Violation(Location.START,
+                    "mesolint failed while checking this file (" + cause + ")",
+                    "please report this with the file attached; the other files were checked")));
+        }
+    }
+
+    FileReport check(Path file, String shown) {
+        LocatedDocument document;
+        try {
+            document = reader.read(file);
+        } catch (YamlProblem e) {
+            return violationReport(shown, null, YamlSyntaxRule.ID,
+                    List.of(new Violation(e.location(), e.getMessage(), e.hint())));
+        } catch (IOException e) {
+            return violationReport(shown, null, YamlSyntaxRule.ID,
+                    List.of(new Violation(Location.START, "cannot read the file: " + e.getMessage(),
+                            "check that the file exists and is readable")));
+        }
+        List<Violation> violations = programmeSchema.validate(document);
+        if (!violations.isEmpty()) {
+            return violationReport(shown, null, SchemaRule.ID, violations);
+        }
+        ProgrammeBinder.Result bound = new ProgrammeBinder().bind(document);
+        if (bound.programme().isEmpty()) {
+            return violationReport(shown, null, SchemaRule.ID, bound.violations());
+        }
+        Programme programme = bound.programme().get();
+        String profile = request.configuration().profileFor(shown, programme);
+        FileScope scope = new FileScope(shown, programme, catalogue.overlay(programme.localExercises()), document,
+                profile);
+        new RuleRunner(rules, request.configuration()).run(scope);
+        return new FileReport(shown, Optional.of(programme), profile, scope.findings());
+    }
+
+    private FileReport violationReport(String shown, Programme programme, String ruleId, List<Violation> violations) {
+        String profile = request.configuration().profileFor(shown, programme);
+        RuleDefinition rule = rules.stream().filter(r -> r.id().equals(ruleId)).findFirst()
+                .orElseThrow(() -> new IllegalStateException("rule " + ruleId + " is not registered"));
+        RuleSettings settings = request.configuration().settingsFor(profile, rule);
+        List<Finding> findings = violations.stream()
+                .map(v -> new Finding(ruleId, settings.severity(), shown, v.location(), v.message(), v.hint(),
+                        Optional.empty()))
+                .toList();
+        return new FileReport(shown, Optional.ofNullable(programme), profile, findings);
+    }
+
+    /** Runs the programme rules of one file in a fixed order, then reports unused waivers. */
+    private static final class RuleRunner {
+        private final List<RuleDefinition> rules;
+        private final RuleConfiguration configuration;
+
+        RuleRunner(List<RuleDefinition> rules, RuleConfiguration configuration) {
+            this.rules = rules;
+            this.configuration = configuration;
+        }
+
+        void run(FileScope scope) {
+            for (RuleDefinition definition : rules) {
+                if (definition instanceof Rule rule) {
+                    RuleSettings settings = configuration.settingsFor(scope.profileName(), rule);
+                    if (settings.severity() != dev.mesolint.core.finding.Severity.OFF) {
+                        rule.check(new dev.mesolint.core.rule.RuleContext(scope, rule.metadata(), settings));
+                    }
+                }
+            }
+            new WaiverAudit(rules, configuration).report(scope);
+        }
+    }
+}

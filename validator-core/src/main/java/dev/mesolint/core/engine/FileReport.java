@@ -1,0 +1,35 @@
+package dev.mesolint.core.engine;
+
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.programme.Programme;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The outcome of checking one file.
+ *
+ * @param displayPath the path relative to the checked root, '/'-separated
+ * @param programme   present when the file loaded (even if rules then found problems)
+ * @param profile     the rule profile the file was checked under
+ */
+public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings) {
+
+    private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
+            .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)
+            .thenComparing(Finding::message);
+
+    public FileReport {
+        findings = findings.stream().sorted(ORDER).toList();
+    }
+
+    /** Findings that count (not waived, not off). */
+    public List<Finding> active() {
+        return findings.stream().filter(f -> !f.waived() && f.severity() != Severity.OFF).toList();
+    }
+
+    public List<Finding> waived() {
+        return findings.stream().filter(Finding::waived).toList();
+    }
+}

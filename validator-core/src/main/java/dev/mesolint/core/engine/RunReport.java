@@ -1,0 +1,35 @@
+package dev.mesolint.core.engine;
+
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import java.util.List;
+
+/**
+ * The outcome of one run over many files.
+ *
+ * @param missing inputs that named no file or folder (a usage error)
+ */
+public record RunReport(List<FileReport> files, Severity failOn, List<String> missing) {
+
+    public RunReport {
+        files = List.copyOf(files);
+        missing = List.copyOf(missing);
+    }
+
+    public List<Finding> active() {
+        return files.stream().flatMap(f -> f.active().stream()).toList();
+    }
+
+    public long count(Severity severity) {
+        return active().stream().filter(f -> f.severity() == severity).count();
+    }
+
+    public long waivedCount() {
+        return files.stream().mapToLong(f -> f.waived().size()).sum();
+    }
+
+    /** True when any active finding is at or above the fail level. */
+    public boolean failed() {
+        return active().stream().anyMatch(f -> f.severity().atLeast(failOn));
+    }
+}

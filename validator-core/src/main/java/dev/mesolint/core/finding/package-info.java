@@ -1,0 +1,2 @@
+/** Findings: what a rule reports, and how severe it is. */
+package dev.mesolint.core.finding;

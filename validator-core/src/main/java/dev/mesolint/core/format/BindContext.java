@@ -1,0 +1,65 @@
+package dev.mesolint.core.format;
+
+import dev.mesolint.core.source.Location;
+import dev.mesolint.core.value.InvalidValueException;
+import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.Pointers;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import tools.jackson.databind.JsonNode;
+
+/**
+ * Per-file state while binding a schema-valid tree to records: locations and the value errors found so far.
+ */
+final class BindContext {
+    private final LocatedDocument document;
+    private final List<Violation> violations = new ArrayList<>();
+
+    BindContext(LocatedDocument document) {
+        this.document = document;
+    }
+
+    Location at(String pointer) {
+        Location l = document.valueAt(pointer);
+        return new Location(l.line(), l.column(), pointer);
+    }
+
+    List<Violation> violations() {
+        return List.copyOf(violations);
+    }
+
+    void reject(String pointer, InvalidValueException e) {
+        violations.add(new Violation(at(pointer), Pointers.lastSegment(pointer) + ": " + e.getMessage(), e.hint()));
+    }
+
+    void reject(String pointer, String message, String hint) {
+        violations.add(new Violation(at(pointer), message, hint));
+    }
+
+    /** Reads an optional value with {@code parser}; a bad value is recorded and read as absent. */
+    <T> Optional<T> value(JsonNode parent, String pointer, String key, ValueParser<T> parser) {
+        JsonNode node = parent.get(key);
+        if (node == null || node.isNull()) {
+            return Optional.empty();
+        }
+        String child = Pointers.child(pointer, key);
+        try {
+            return Optional.of(parser.parse(node.asString()));
+        } catch (InvalidValueException e) {
+            reject(child, e);
+            return Optional.empty();
+        }
+    }
+
+    static String text(JsonNode parent, String key) {
+        JsonNode node = parent.get(key);
+        return node == null || node.isNull() ? null : node.asString();
+    }
+
+    /** A value parser that may refuse its input. */
+    @FunctionalInterface
+    interface ValueParser<T> {
+        T parse(String text) throws InvalidValueException;
+    }
+}

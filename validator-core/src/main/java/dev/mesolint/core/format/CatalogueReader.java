@@ -1,0 +1,85 @@
+package dev.mesolint.core.format;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.CatalogueFile;
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.rules.SchemaRule;
+import dev.mesolint.core.rules.YamlSyntaxRule;
+import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.LocatedYamlReader;
+import dev.mesolint.core.yaml.YamlProblem;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Reads catalogue files (the built-in one and a repository's own) through the same safe, located path. */
+public final class CatalogueReader {
+    public static final String BUILT_IN = "/dev/mesolint/catalogue/exercises.yaml";
+
+    private final LocatedYamlReader reader;
+    private final FormatSchema schema;
+
+    public CatalogueReader(LocatedYamlReader reader, FormatSchema catalogueSchema) {
+        this.reader = reader;
+        this.schema = catalogueSchema;
+    }
+
+    /** The catalogue shipped in the core jar. A broken built-in catalogue is a defect: it fails loudly. */
+    public Catalogue builtIn() {
+        try (InputStream in = CatalogueReader.class.getResourceAsStream(BUILT_IN)) {
+            if (in == null) {
+                throw new IllegalStateException("the built-in catalogue is missing from the core jar");
+            }
+            CatalogueFile file = read(reader.read(in.readAllBytes()), "built-in");
+            if (!file.ok()) {
+                throw new IllegalStateException("the built-in catalogue is invalid: " + file.violations());
+            }
+            return Catalogue.of(file.entries());
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        } catch (YamlProblem e) {
+            throw new IllegalStateException("the built-in catalogue does not parse: " + e.getMessage(), e);
+        }
+    }
+
+    public CatalogueFile read(Path path, String displayPath) {
+        try {
+            return read(reader.read(path), displayPath);
+        } catch (YamlProblem e) {
+            return new CatalogueFile(displayPath, List.of(), List.of(new Violation(e.location(), e.getMessage(),
+                    e.hint())), YamlSyntaxRule.ID);
+        } catch (IOException e) {
+            return new CatalogueFile(displayPath, List.of(), List.of(new Violation(
+                    dev.mesolint.core.source.Location.START, "cannot read the catalogue file: " + e.getMessage(),
+                    "check the path in the configuration")), YamlSyntaxRule.ID);
+        }
+    }
+
+    private CatalogueFile read(LocatedDocument document, String displayPath) {
+        List<Violation> violations = new ArrayList<>(schema.validate(document));
+        if (!violations.isEmpty()) {
+            return new CatalogueFile(displayPath, List.of(), violations, SchemaRule.ID);
+        }
+        BindContext ctx = new BindContext(document);
+        List<Exercise> entries = CatalogueEntryBinder.readAll(ctx, document.root().get("exercises"), "/exercises",
+                displayPath);
+        Map<String, Exercise> seen = new HashMap<>();
+        for (Exercise e : entries) {
+            Exercise earlier = seen.putIfAbsent(e.id(), e);
+            if (earlier != null) {
+                violations.add(new Violation(e.location(), "catalogue id '" + e.id() + "' is written twice (first at line "
+                        + earlier.location().line() + ")", "keep one entry per id"));
+            }
+            if (e.primeMover().isEmpty()) {
+                violations.add(new Violation(e.location(), "'" + e.id() + "' has no prime mover (no muscle with credit 1)",
+                        "give the main muscle credit 1; synergists get 0.5"));
+            }
+        }
+        return new CatalogueFile(displayPath, violations.isEmpty() ? entries : List.of(), violations, SchemaRule.ID);
+    }
+}

@@ -1,0 +1,70 @@
+package dev.mesolint.core.format;
+
+import com.networknt.schema.Schema;
+import com.networknt.schema.SchemaRegistry;
+import com.networknt.schema.SpecificationVersion;
+import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.Pointers;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A published JSON Schema (programme or catalogue), compiled once and shared by every file of a run.
+ *
+ * <p>Thread-safe: networknt compiles the schema into immutable validators; per-call state lives in its context.
+ */
+public final class FormatSchema {
+    public static final String PROGRAMME = "programme.schema.json";
+    public static final String CATALOGUE = "catalogue.schema.json";
+
+    private final Schema schema;
+
+    private FormatSchema(Schema schema) {
+        this.schema = schema;
+    }
+
+    /** Loads and compiles the schema shipped in the core jar under {@code dev/mesolint/schema/}. */
+    public static FormatSchema load(String name) {
+        SchemaRegistry registry = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12);
+        try (InputStream in = FormatSchema.class.getResourceAsStream("/dev/mesolint/schema/" + name)) {
+            if (in == null) {
+                throw new IllegalStateException("schema " + name + " is missing from the core jar");
+            }
+            Schema schema = registry.getSchema(in);
+            schema.initializeValidators();
+            return new FormatSchema(schema);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The violations, located at the YAML node each is about, one per place, in file order. */
+    public List<Violation> validate(LocatedDocument document) {
+        List<com.networknt.schema.Error> errors = schema.validate(document.root());
+        Map<String, Violation> byPlace = new LinkedHashMap<>();
+        for (com.networknt.schema.Error error : errors) {
+            Violation v = SchemaMessages.describe(error, document);
+            // if/then/else unions report the same place twice; the first (most specific) message is kept.
+            byPlace.putIfAbsent(v.location().pointer() + "|" + v.location().line() + ":" + v.location().column(), v);
+        }
+        return byPlace.values().stream()
+                .sorted(Comparator.comparingInt((Violation v) -> v.location().line())
+                        .thenComparingInt(v -> v.location().column()))
+                .toList();
+    }
+
+    static String pointerOf(com.networknt.schema.path.NodePath path) {
+        String pointer = "";
+        for (int i = 0; i < path.getNameCount(); i++) {
+            Object element = path.getElement(i);
+            pointer = element instanceof Integer index ? Pointers.child(pointer, index)
+                    : Pointers.child(pointer, String.valueOf(element));
+        }
+        return pointer;
+    }
+}

@@ -1,0 +1,7 @@
+package dev.mesolint.core.format;
+
+import dev.mesolint.core.source.Location;
+
+/** A place where a document breaks the programme format: what is wrong and how to fix it. */
+public record Violation(Location location, String message, String hint) {
+}

@@ -1,0 +1,49 @@
+package dev.mesolint.core.report;
+
+import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import java.io.PrintWriter;
+
+/**
+ * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
+ * next line, then a summary and the caution. Editors and CI log parsers read the first line's form.
+ */
+public final class ConsoleReport {
+    private final boolean showWaived;
+
+    public ConsoleReport(boolean showWaived) {
+        this.showWaived = showWaived;
+    }
+
+    public void write(RunReport run, PrintWriter out) {
+        for (FileReport file : run.files()) {
+            for (Finding f : file.findings()) {
+                if (f.waived() && !showWaived || f.severity() == Severity.OFF) {
+                    continue;
+                }
+                out.println(line(f));
+                out.println("    fix: " + f.fix());
+                f.waiver().ifPresent(w -> out.println("    waived at line " + w.location().line() + ": " + w.reason()));
+            }
+        }
+        out.println(summary(run));
+        out.println("Note: " + Mesolint.CAUTION);
+        out.flush();
+    }
+
+    public static String line(Finding f) {
+        return f.file() + ":" + f.location().line() + ":" + f.location().column() + ": "
+                + (f.waived() ? "waived " : "") + f.severity().label() + " " + f.ruleId() + ": " + f.message();
+    }
+
+    static String summary(RunReport run) {
+        long files = run.files().size();
+        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s", files,
+                files == 1 ? "" : "s", run.count(Severity.ERROR), run.count(Severity.ERROR) == 1 ? "" : "s",
+                run.count(Severity.WARNING), run.count(Severity.WARNING) == 1 ? "" : "s", run.count(Severity.INFO),
+                run.waivedCount(), run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
+    }
+}

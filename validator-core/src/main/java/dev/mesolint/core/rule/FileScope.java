@@ -1,0 +1,76 @@
+package dev.mesolint.core.rule;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.programme.Programme;
+import dev.mesolint.core.programme.Waiver;
+import dev.mesolint.core.yaml.LocatedDocument;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Per-file state of one run: the loaded programme, the findings so far and which waivers were used.
+ * Confined to the thread that checks the file.
+ */
+public final class FileScope {
+    private final String displayPath;
+    private final Programme programme;
+    private final Catalogue catalogue;
+    private final LocatedDocument document;
+    private final String profileName;
+    private final List<Finding> findings = new ArrayList<>();
+    private final Set<Waiver> used = Collections.newSetFromMap(new IdentityHashMap<>());
+
+    public FileScope(String displayPath, Programme programme, Catalogue catalogue, LocatedDocument document,
+            String profileName) {
+        this.displayPath = displayPath;
+        this.programme = programme;
+        this.catalogue = catalogue;
+        this.document = document;
+        this.profileName = profileName;
+    }
+
+    public String displayPath() {
+        return displayPath;
+    }
+
+    public Programme programme() {
+        return programme;
+    }
+
+    public Catalogue catalogue() {
+        return catalogue;
+    }
+
+    public LocatedDocument document() {
+        return document;
+    }
+
+    public String profileName() {
+        return profileName;
+    }
+
+    /** Records a finding, waived when a waiver at its place (or for the whole file) names its rule. */
+    void add(Finding finding, List<Waiver> waivers) {
+        Waiver match = waivers.stream().filter(w -> w.covers(finding.ruleId())).findFirst()
+                .or(() -> programme.fileWaivers().stream().filter(w -> w.covers(finding.ruleId())).findFirst())
+                .orElse(null);
+        if (match != null) {
+            used.add(match);
+            findings.add(finding.waivedBy(match));
+        } else {
+            findings.add(finding);
+        }
+    }
+
+    public List<Finding> findings() {
+        return List.copyOf(findings);
+    }
+
+    public boolean used(Waiver waiver) {
+        return used.contains(waiver);
+    }
+}

@@ -1,0 +1,87 @@
+package dev.mesolint.core.rule;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.programme.Located;
+import dev.mesolint.core.programme.Programme;
+import dev.mesolint.core.programme.Waiver;
+import dev.mesolint.core.source.Location;
+import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.Pointers;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * What one rule sees of one file, and where it reports. Created per rule and file; not shared between threads.
+ */
+public final class RuleContext {
+    private final FileScope file;
+    private final RuleMetadata rule;
+    private final RuleSettings settings;
+
+    public RuleContext(FileScope file, RuleMetadata rule, RuleSettings settings) {
+        this.file = file;
+        this.rule = rule;
+        this.settings = settings;
+    }
+
+    public Programme programme() {
+        return file.programme();
+    }
+
+    public Catalogue catalogue() {
+        return file.catalogue();
+    }
+
+    public Optional<Exercise> exercise(String id) {
+        return file.catalogue().find(id);
+    }
+
+    public String profileName() {
+        return file.profileName();
+    }
+
+    /** A parameter's configured value, in its base unit (seconds, fraction, count). */
+    public double param(String name) {
+        return settings.value(name);
+    }
+
+    /** A parameter as a profile would write it, for messages: {@code 2min}, {@code 30%}. */
+    public String shown(String name) {
+        return rule.parameter(name).map(p -> p.format(param(name))).orElseThrow();
+    }
+
+    /** Reports a finding about {@code subject}; the waivers in force there are applied. */
+    public void report(Located subject, String message, String fix) {
+        report(subject.location(), subject.waivers(), message, fix);
+    }
+
+    public void report(Location location, List<Waiver> waivers, String message, String fix) {
+        Finding finding = new Finding(rule.id(), settings.severity(), file.displayPath(), location, message, fix,
+                Optional.empty());
+        file.add(finding, waivers);
+    }
+
+    /**
+     * Where a key of {@code subject} was written ({@code rest} of a set): on the node itself, else on the entry the
+     * value was inherited from, else the subject's own location.
+     */
+    public Location fieldLocation(Located subject, String key) {
+        LocatedDocument doc = file.document();
+        String pointer = subject.location().pointer();
+        while (true) {
+            String candidate = Pointers.child(pointer, key);
+            if (doc.values().containsKey(candidate)) {
+                Location l = doc.values().get(candidate);
+                return new Location(l.line(), l.column(), candidate);
+            }
+            // climb from a set in a list (/…/sets/2) to its entry (/…); stop at the work item
+            if (pointer.matches(".*/sets/\\d+")) {
+                pointer = pointer.substring(0, pointer.lastIndexOf("/sets/"));
+            } else {
+                return subject.location();
+            }
+        }
+    }
+}

@@ -1,0 +1,181 @@
+package dev.mesolint.core.yaml;
+
+import dev.mesolint.core.source.Location;
+import java.io.IOException;
+import java.io.StringReader;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.Iterator;
+import java.util.Map;
+import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.Yaml;
+import org.yaml.snakeyaml.constructor.SafeConstructor;
+import org.yaml.snakeyaml.error.Mark;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
+import org.yaml.snakeyaml.error.YAMLException;
+import org.yaml.snakeyaml.nodes.Node;
+
+/**
+ * Reads one YAML file safely into a {@link LocatedDocument}: size and text checks first, then SnakeYAML's composer
+ * (no object construction, so no arbitrary types), then a located conversion to a JSON tree.
+ *
+ * <p>Thread-safe: every call builds its own parser.
+ */
+public final class LocatedYamlReader {
+    static final String SYNTAX_HINT = "check the indentation (spaces, not tabs), that every 'key: value' has a space "
+            + "after the colon, and quote values that contain ': ' or ' #'";
+
+    private final YamlLimits limits;
+
+    public LocatedYamlReader(YamlLimits limits) {
+        this.limits = limits;
+    }
+
+    public LocatedDocument read(Path file) throws IOException, YamlProblem {
+        long size = Files.size(file);
+        if (size > limits.maxFileBytes()) {
+            throw new YamlProblem(String.format("the file is %.1f MB, over the %.1f MB limit for one programme",
+                    size / 1048576.0, limits.maxFileBytes() / 1048576.0),
+                    "split the block into several programme files, or check that this is a programme at all",
+                    Location.START);
+        }
+        return read(Files.readAllBytes(file));
+    }
+
+    public LocatedDocument read(byte[] bytes) throws YamlProblem {
+        if (bytes.length > limits.maxFileBytes()) {
+            throw new YamlProblem("the file is over the " + limits.maxFileBytes() + "-byte limit",
+                    "split the block into several programme files", Location.START);
+        }
+        return read(decode(bytes));
+    }
+
+    public LocatedDocument read(String text) throws YamlProblem {
+        LoaderOptions options = loaderOptions();
+        Iterator<Node> documents;
+        Node root;
+        try {
+            documents = new Yaml(new SafeConstructor(options)).composeAll(new StringReader(text)).iterator();
+            if (!documents.hasNext()) {
+                throw empty();
+            }
+            root = documents.next();
+            if (root == null) {
+                throw empty();
+            }
+            if (documents.hasNext()) {
+                Node second = documents.next();
+                throw new YamlProblem("the file holds more than one YAML document",
+                        "keep one programme per file and remove the '---' separator", at(second.getStartMark()));
+            }
+        } catch (MarkedYAMLException e) {
+            throw syntaxProblem(e);
+        } catch (YAMLException e) {
+            throw limitProblem(e);
+        } catch (StackOverflowError e) {
+            throw new YamlProblem("the file nests too deeply to read", "keep nesting under " + limits.maxDepth()
+                    + " levels", Location.START);
+        }
+        return new TreeBuilder(limits).build(root);
+    }
+
+    private LoaderOptions loaderOptions() {
+        LoaderOptions o = new LoaderOptions();
+        o.setMaxAliasesForCollections(limits.maxAliases());
+        o.setNestingDepthLimit(limits.maxDepth());
+        o.setCodePointLimit((int) Math.min(Integer.MAX_VALUE, limits.maxFileBytes()));
+        o.setAllowRecursiveKeys(false);
+        o.setProcessComments(false);
+        o.setAllowDuplicateKeys(false);
+        return o;
+    }
+
+    private static YamlProblem empty() {
+        return new YamlProblem("the file is empty", "start from a sample programme: format: 1, programme:, weeks:",
+                Location.START);
+    }
+
+    private static String decode(byte[] bytes) throws YamlProblem {
+        for (int i = 0; i < Math.min(bytes.length, 8192); i++) {
+            if (bytes[i] == 0) {
+                throw new YamlProblem("this is a binary file, not YAML text",
+                        "remove it from the programme folder or give it another extension", Location.START);
+            }
+        }
+        try {
+            String text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
+            return text.startsWith("\uFEFF") ? text.substring(1) : text;
+        } catch (CharacterCodingException e) {
+            throw new YamlProblem("the file is not UTF-8 text", "save it as UTF-8", Location.START);
+        }
+    }
+
+    private static YamlProblem syntaxProblem(MarkedYAMLException e) {
+        Mark mark = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
+        String problem = e.getProblem() != null ? e.getProblem() : e.getMessage();
+        String context = e.getContext() != null ? " (" + e.getContext() + ")" : "";
+        String message = problem.contains("exceeds the specified") || problem.contains("Nesting Depth")
+                ? limitMessage(problem) : "YAML syntax: " + problem + context;
+        return new YamlProblem(message, hintFor(problem), at(mark));
+    }
+
+    private YamlProblem limitProblem(YAMLException e) {
+        return new YamlProblem(limitMessage(String.valueOf(e.getMessage())), "remove the repeated aliases or deep nesting; "
+                + "a programme needs neither", Location.START);
+    }
+
+    private static String limitMessage(String raw) {
+        if (raw.contains("aliases")) {
+            return "too many YAML aliases to collections (a possible alias bomb): " + raw;
+        }
+        if (raw.toLowerCase(java.util.Locale.ROOT).contains("nesting depth")) {
+            return "the document nests too deeply: " + raw;
+        }
+        if (raw.contains("code point")) {
+            return "the file is too large: " + raw;
+        }
+        return "YAML could not be read: " + raw;
+    }
+
+    private static String hintFor(String problem) {
+        if (problem.contains("found character '\\t'") || problem.contains("tab")) {
+            return "indent with spaces; YAML does not allow tabs";
+        }
+        if (problem.contains("found duplicate key")) {
+            return "remove or rename the repeated key";
+        }
+        if (problem.contains("aliases") || problem.contains("depth")) {
+            return "remove the repeated aliases or deep nesting; a programme needs neither";
+        }
+        if (problem.contains("could not determine a constructor") || problem.contains("tag")) {
+            return "remove the '!' tag; programmes use plain values only";
+        }
+        return SYNTAX_HINT;
+    }
+
+    static Location at(Mark mark) {
+        return mark == null ? Location.START : new Location(mark.getLine() + 1, mark.getColumn() + 1, "");
+    }
+
+    /** Converts composed nodes to a JSON tree, recording where each node was written. */
+    private static final class TreeBuilder {
+        private final YamlLimits limits;
+        private final Map<String, Location> values = new HashMap<>();
+        private final Map<String, Location> keys = new HashMap<>();
+
+        TreeBuilder(YamlLimits limits) {
+            this.limits = limits;
+        }
+
+        LocatedDocument build(Node root) throws YamlProblem {
+            var tree = new NodeConverter(limits, values, keys).convert(root, "", 0);
+            return new LocatedDocument(tree, Map.copyOf(values), Map.copyOf(keys));
+        }
+    }
+}
