@@ -25,6 +25,9 @@ final class SchemaMessages {
             "weeks", "week", "deload", "repeat", "adjust", "only", "sessions", "day", "work", "exercise", "warm-up",
             "sets", "reps", "rir", "rpe", "load", "rest", "tempo", "technique", "superset", "rounds", "items", "note");
 
+    /** Keys that are one of several alternatives (sessions or repeat; region and max-load, or avoid). */
+    private static final List<String> ALTERNATIVES = List.of("sessions", "repeat", "region", "max-load", "avoid");
+
     private static final Map<String, String> HINTS = Map.ofEntries(
             Map.entry("rest", Durations.HINT),
             Map.entry("reps", RepTarget.HINT),
@@ -59,6 +62,10 @@ final class SchemaMessages {
         String property = error.getProperty();
         switch (keyword) {
             case "required" -> {
+                if (ALTERNATIVES.contains(property) && (pointer.matches("/weeks/\\d+") || pointer.contains("/constraints/"))) {
+                    Location at = located(document.valueAt(pointer), pointer);
+                    return new Violation(at, anyOfMessage(pointer), anyOfHint(pointer));
+                }
                 Location at = located(document.valueAt(pointer), pointer);
                 return new Violation(at, where(pointer) + " is missing '" + property + "'",
                         "add " + property + ":" + hint(property).map(h -> " (" + h + ")").orElse(""));
@@ -129,9 +136,22 @@ final class SchemaMessages {
     }
 
     static Optional<String> closestKey(String key) {
-        LevenshteinDistance distance = LevenshteinDistance.getDefaultInstance();
         return KNOWN_KEYS.stream()
-                .filter(k -> distance.apply(k, key) <= Math.max(1, key.length() / 3))
-                .min(Comparator.comparingInt(k -> distance.apply(k, key)));
+                .filter(k -> typoDistance(k, key) <= Math.max(1, key.length() / 3))
+                .min(Comparator.comparingDouble(k -> typoDistance(k, key)));
+    }
+
+    /** Edit distance, with swapped letters ({@code sest} for {@code sets}) counted as the closest typo. */
+    private static double typoDistance(String known, String written) {
+        if (sortedLetters(known).equals(sortedLetters(written))) {
+            return 0.5;
+        }
+        return LevenshteinDistance.getDefaultInstance().apply(known, written);
+    }
+
+    private static String sortedLetters(String s) {
+        char[] c = s.toCharArray();
+        java.util.Arrays.sort(c);
+        return new String(c);
     }
 }
