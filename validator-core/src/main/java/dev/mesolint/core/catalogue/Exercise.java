@@ -2,7 +2,7 @@ package dev.mesolint.core.catalogue;
 
 import dev.mesolint.core.source.Location;
 import java.util.Collections;
-import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.EnumSet;
 import java.util.Map;
 import java.util.Optional;
@@ -21,11 +21,12 @@ public record Exercise(String id, String name, ExerciseKind kind, MovementPatter
     public static final double SYNERGIST = 0.5;
 
     public Exercise {
-        muscles = Collections.unmodifiableMap(new EnumMap<>(muscles));
+        // insertion order kept: the first muscle written with credit 1 is the prime mover
+        muscles = Collections.unmodifiableMap(new LinkedHashMap<>(muscles));
         regions = regions.isEmpty() ? Set.of() : Collections.unmodifiableSet(EnumSet.copyOf(regions));
     }
 
-    /** The muscle with credit 1; the first one in muscle order when several have it. */
+    /** The muscle with credit 1; the first one written when several have it (a back squat: quadriceps). */
     public Optional<Muscle> primeMover() {
         return muscles.entrySet().stream().filter(e -> e.getValue() >= PRIME_MOVER).map(Map.Entry::getKey).findFirst();
     }

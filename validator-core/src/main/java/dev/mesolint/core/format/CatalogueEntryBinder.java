@@ -10,7 +10,7 @@ import dev.mesolint.core.catalogue.Skill;
 import dev.mesolint.core.catalogue.Stability;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.ArrayList;
-import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
@@ -34,7 +34,7 @@ final class CatalogueEntryBinder {
     }
 
     private static Exercise read(JsonNode e, BindContext ctx, String pointer, String origin) {
-        Map<Muscle, Double> muscles = new EnumMap<>(Muscle.class);
+        Map<Muscle, Double> muscles = new LinkedHashMap<>();
         for (Map.Entry<String, JsonNode> m : e.get("muscles").properties()) {
             muscles.put(named(Muscle.class, m.getKey()), m.getValue().doubleValue());
         }

@@ -56,6 +56,8 @@ class BuiltInCatalogueTests {
         assertEquals(1.0, bench.credit(Muscle.CHEST));
         assertEquals(0.5, bench.credit(Muscle.TRICEPS));
         assertEquals(Muscle.CHEST, bench.primeMover().orElseThrow());
+        // common practice: the back squat is first a quadriceps lift, with the glutes also prime movers
+        assertEquals(Muscle.QUADRICEPS, CATALOGUE.find("barbell-back-squat").orElseThrow().primeMover().orElseThrow());
         // common practice: a curl is a one-joint biceps exercise
         Exercise curl = CATALOGUE.find("cable-curl").orElseThrow();
         assertEquals(ExerciseKind.ISOLATION, curl.kind());
