@@ -64,6 +64,11 @@ public final class Checker {
         return catalogue;
     }
 
+    /** The findings on the request's extra catalogue files (files that did not load), one report per bad file. */
+    public List<FileReport> catalogueReports() {
+        return catalogueReports;
+    }
+
     /** Checks every programme file found under {@code request.inputs()}. */
     public RunReport run() {
         List<Path> missing = new ArrayList<>();
@@ -71,6 +76,11 @@ public final class Checker {
         List<FileReport> reports = new ArrayList<>(catalogueReports);
         reports.addAll(files.parallelStream().map(this::checkSafely).toList());
         return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
+    }
+
+    /** Checks one programme file; any failure becomes a finding on that file, never an exception. */
+    public FileReport checkFile(Path file) {
+        return checkSafely(file);
     }
 
     private FileReport checkSafely(Path file) {

@@ -16,6 +16,11 @@ public enum Severity {
         return this != OFF && compareTo(level) <= 0;
     }
 
+    /** A level a run can fail on: error, warning or info (never off). */
+    public static Optional<Severity> parseFailLevel(String text) {
+        return parse(text).filter(s -> s != OFF);
+    }
+
     public static Optional<Severity> parse(String text) {
         for (Severity s : values()) {
             if (s.label().equalsIgnoreCase(text == null ? "" : text.trim())) {

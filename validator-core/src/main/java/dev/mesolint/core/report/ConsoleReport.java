@@ -6,6 +6,8 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
@@ -24,9 +26,7 @@ public final class ConsoleReport {
                 if (f.waived() && !showWaived || f.severity() == Severity.OFF) {
                     continue;
                 }
-                out.println(line(f));
-                out.println("    fix: " + f.fix());
-                f.waiver().ifPresent(w -> out.println("    waived at line " + w.location().line() + ": " + w.reason()));
+                lines(f).forEach(out::println);
             }
         }
         out.println(summary(run));
@@ -39,7 +39,17 @@ public final class ConsoleReport {
                 + (f.waived() ? "waived " : "") + f.severity().label() + " " + f.ruleId() + ": " + f.message();
     }
 
-    static String summary(RunReport run) {
+    /** A finding as printed: its {@link #line}, the fix, and the waiver's reason when waived. */
+    public static List<String> lines(Finding f) {
+        List<String> lines = new ArrayList<>();
+        lines.add(line(f));
+        lines.add("    fix: " + f.fix());
+        f.waiver().ifPresent(w -> lines.add("    waived at line " + w.location().line() + ": " + w.reason()));
+        return lines;
+    }
+
+    /** The closing count line, e.g. {@code 4 files checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED ...}. */
+    public static String summary(RunReport run) {
         long files = run.files().size();
         return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s", files,
                 files == 1 ? "" : "s", run.count(Severity.ERROR), run.count(Severity.ERROR) == 1 ? "" : "s",

@@ -1,0 +1,59 @@
+package dev.mesolint.core.cache;
+
+import dev.mesolint.core.Mesolint;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Everything besides a programme's own text that can change its findings: the tool version, the rules, the option
+ * values and the contents of the configuration files (repository configuration, profiles, catalogues, baseline).
+ * Two runs with equal keys give equal findings for equal file contents.
+ */
+public final class ConfigurationKey {
+    private final List<String> parts = new ArrayList<>();
+
+    private ConfigurationKey(String toolVersion) {
+        parts.add("mesolint " + toolVersion);
+    }
+
+    /** A key for this build of mesolint. */
+    public static ConfigurationKey forThisVersion() {
+        return new ConfigurationKey(Mesolint.version());
+    }
+
+    /** A key as another version would make it (for tests of version changes). */
+    static ConfigurationKey forVersion(String version) {
+        return new ConfigurationKey(version);
+    }
+
+    /** An option value; {@code null} and absent are the same. */
+    public ConfigurationKey option(String name, Object value) {
+        parts.add("option " + name + "=" + (value == null ? "" : value));
+        return this;
+    }
+
+    /**
+     * A configuration file by content: editing it, creating it or deleting it changes the key. A file that exists but
+     * cannot be read is an error for the caller, who would fail reading it anyway.
+     */
+    public ConfigurationKey file(String role, Path file) throws IOException {
+        if (file == null || !Files.exists(file)) {
+            parts.add("file " + role + " absent");
+        } else {
+            parts.add("file " + role + " " + ContentHash.ofFile(file));
+        }
+        return this;
+    }
+
+    public String value() {
+        return ContentHash.of(String.join("\n", parts));
+    }
+
+    @Override
+    public String toString() {
+        return String.join("; ", parts);
+    }
+}

@@ -1,0 +1,36 @@
+package dev.mesolint.core.cache;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+
+/** SHA-256 of file contents and of text, as lower-case hex. */
+public final class ContentHash {
+    private ContentHash() {
+    }
+
+    public static String of(byte[] bytes) {
+        return HexFormat.of().formatHex(digest().digest(bytes));
+    }
+
+    public static String of(String text) {
+        return of(text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** The hash of a file's bytes; throws when the file cannot be read. */
+    public static String ofFile(Path file) throws IOException {
+        return of(Files.readAllBytes(file));
+    }
+
+    private static MessageDigest digest() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
+    }
+}
