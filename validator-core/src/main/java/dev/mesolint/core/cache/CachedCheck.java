@@ -38,7 +38,11 @@ public final class CachedCheck {
         this.rules = List.copyOf(rules);
     }
 
-    /** Checks every programme file of the request; {@code cache} is read, updated and saved when present. */
+    /**
+     * Checks every programme file of the request. {@code cache}, when present, is read and given this run's results;
+     * saving it is the caller's choice ({@link ResultCache#save()}), so a cache that cannot be written never costs a
+     * result.
+     */
     public Outcome run(Optional<ResultCache> cache) throws IOException {
         List<Path> missing = new ArrayList<>();
         List<Path> files;
@@ -68,7 +72,6 @@ public final class CachedCheck {
                     c.put(p.shown(), p.hash(), reports.get(catalogues + i));
                 }
             }
-            c.save();
         }
         RunReport report = new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
         return new Outcome(report, reused, pending.size() - reused, unreadable);

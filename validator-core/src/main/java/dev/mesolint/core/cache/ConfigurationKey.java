@@ -2,6 +2,7 @@ package dev.mesolint.core.cache;
 
 import dev.mesolint.core.Mesolint;
 import java.io.IOException;
+import java.net.URISyntaxException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -19,9 +20,22 @@ public final class ConfigurationKey {
         parts.add("mesolint " + toolVersion);
     }
 
-    /** A key for this build of mesolint. */
+    /**
+     * A key for this build of mesolint: the version, and the size and time of the jar it runs from, so that a rebuilt
+     * snapshot does not reuse what an older build of the same version found.
+     */
     public static ConfigurationKey forThisVersion() {
-        return new ConfigurationKey(Mesolint.version());
+        return new ConfigurationKey(Mesolint.version() + " " + codeStamp());
+    }
+
+    private static String codeStamp() {
+        try {
+            Path code = Path.of(Mesolint.class.getProtectionDomain().getCodeSource().getLocation().toURI());
+            return Files.isRegularFile(code) ? Files.size(code) + "@" + Files.getLastModifiedTime(code).toMillis()
+                    : "classes";
+        } catch (IOException | URISyntaxException | RuntimeException e) {
+            return "unknown";
+        }
     }
 
     /** A key as another version would make it (for tests of version changes). */

@@ -42,7 +42,10 @@ class CachedCheckTests {
     private CachedCheck.Outcome run(ConfigurationKey key, List<Path> catalogues) throws IOException {
         CheckRequest request = new CheckRequest(List.of(programmes), dir, Severity.ERROR, catalogues,
                 RuleConfiguration.DEFAULTS, YamlLimits.DEFAULTS);
-        return new CachedCheck(request, BuiltInRules.all()).run(Optional.of(ResultCache.open(cacheFile, key)));
+        ResultCache cache = ResultCache.open(cacheFile, key);
+        CachedCheck.Outcome outcome = new CachedCheck(request, BuiltInRules.all()).run(Optional.of(cache));
+        cache.save();
+        return outcome;
     }
 
     private CachedCheck.Outcome run() throws IOException {

@@ -1,0 +1,51 @@
+package dev.mesolint.maven;
+
+import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Severity;
+import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.MojoFailureException;
+import org.apache.maven.plugins.annotations.LifecyclePhase;
+import org.apache.maven.plugins.annotations.Mojo;
+
+/**
+ * Checks the repository's programmes and fails the build when a finding reaches the fail level. Every finding is
+ * logged first as {@code file:line:column: severity rule-id: message} with its fix, then the build fails once.
+ *
+ * @since 0.1.0
+ */
+@Mojo(name = "check", defaultPhase = LifecyclePhase.VERIFY, threadSafe = true)
+public class CheckMojo extends AbstractMesolintMojo {
+
+    @Override
+    boolean useCache() {
+        return useCache;
+    }
+
+    @Override
+    void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException, MojoFailureException {
+        RunReport run = outcome.report();
+        new FindingLog(getLog(), showWaived).write(run);
+        failOnBrokenRun(outcome);
+        if (run.failed()) {
+            throw new MojoFailureException(failureMessage(run));
+        }
+    }
+
+    static String failureMessage(RunReport run) {
+        long errors = run.count(Severity.ERROR);
+        long warnings = run.count(Severity.WARNING);
+        long infos = run.count(Severity.INFO);
+        StringBuilder counts = new StringBuilder(errors + " error" + (errors == 1 ? "" : "s"));
+        if (run.failOn() != Severity.ERROR) {
+            counts.append(", ").append(warnings).append(" warning").append(warnings == 1 ? "" : "s");
+        }
+        if (run.failOn() == Severity.INFO) {
+            counts.append(", ").append(infos).append(" info");
+        }
+        return "mesolint: " + counts + " at or above the fail level '" + run.failOn().label() + "' in "
+                + run.files().stream().filter(f -> f.active().stream().anyMatch(x -> x.severity().atLeast(
+                        run.failOn()))).count() + " of " + run.files().size() + " files; fix them (see the "
+                + "findings above) or waive each with a reason";
+    }
+}
