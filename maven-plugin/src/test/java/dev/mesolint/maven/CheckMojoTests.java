@@ -1,0 +1,84 @@
+package dev.mesolint.maven;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.MojoFailureException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CheckMojoTests {
+    @TempDir
+    Path dir;
+
+    private MojoFixture repository() throws IOException {
+        return new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME)
+                .programme("rehab/misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench"));
+    }
+
+    @Test
+    void findingsAreAllLoggedThenTheBuildFailsOnceWithTheCounts() throws IOException {
+        MojoFixture repo = repository();
+        MojoFailureException failure = assertThrows(MojoFailureException.class, () -> repo.check().execute());
+
+        assertEquals("mesolint: 1 error at or above the fail level 'error' in 1 of 2 files; fix them (see the "
+                + "findings above) or waive each with a reason", failure.getMessage());
+        List<String> lines = repo.log.lines;
+        assertTrue(lines.contains("[ERROR] programmes/rehab/misspelt.yaml:15:23: error unknown-exercise: unknown "
+                + "exercise 'barbel-bench-press'; closest ids: barbell-bench-press, dumbbell-bench-press, "
+                + "barbell-push-press"), repo.log.text());
+        assertTrue(lines.contains("[ERROR]     fix: exercise: barbell-bench-press, or add a local entry under "
+                + "exercises:"), repo.log.text());
+        assertEquals(1, lines.stream().filter(l -> l.startsWith("[INFO] mesolint: Note: ")).count());
+    }
+
+    @Test
+    void whereEachSettingCameFromIsLoggedAtDebug() throws Exception {
+        MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
+        CheckMojo mojo = repo.check();
+        mojo.failOn = "warning";
+        mojo.execute();
+        String log = repo.log.text();
+        assertTrue(log.contains("[DEBUG] mesolint: failOn = warning (plugin parameter failOn)"), log);
+        assertTrue(log.contains("[DEBUG] mesolint: profile = chosen by each programme's goal (built-in default)"),
+                log);
+        assertTrue(log.contains("[INFO] mesolint: 1 file checked: 0 errors, 0 warnings, 0 info, 0 waived"), log);
+    }
+
+    @Test
+    void aBadParameterValueIsAnExecutionErrorNamingTheParameter() throws IOException {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.failOn = "fatal";
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertEquals("mesolint: failOn (mesolint.failOn) must be error, warning or info, not 'fatal'",
+                error.getMessage());
+
+        CheckMojo unknownProfile = repo.check();
+        unknownProfile.profile = "powerbuilding";
+        assertTrue(assertThrows(MojoExecutionException.class, unknownProfile::execute).getMessage()
+                .startsWith("mesolint: profile (mesolint.profile): unknown profile 'powerbuilding'"));
+    }
+
+    @Test
+    void aMissingProgrammesFolderIsAnExecutionErrorNamingTheParameter() {
+        CheckMojo mojo = new MojoFixture(dir).check();
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(error.getMessage().startsWith("mesolint: programmes (mesolint.programmes): no such folder"),
+                error.getMessage());
+    }
+
+    @Test
+    void skipDoesNothing() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.skip = true;
+        mojo.execute();
+        assertEquals(List.of("[INFO] mesolint: skipped (mesolint.skip)"), repo.log.lines);
+    }
+}

@@ -1,0 +1,40 @@
+package dev.mesolint.maven;
+
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.apache.maven.plugin.MojoExecutionException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ReportMojoTests {
+    @TempDir
+    Path dir;
+
+    @Test
+    void writesTheTextReportAndDoesNotFailOnFindings() throws Exception {
+        MojoFixture repo = new MojoFixture(dir)
+                .programme("misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench"));
+        repo.report().execute();
+
+        String report = Files.readString(dir.resolve("target/mesolint/mesolint.txt"));
+        assertTrue(report.startsWith("programmes/misspelt.yaml:15:23: error unknown-exercise:"), report);
+        assertTrue(report.contains("1 file checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED"), report);
+        assertTrue(report.contains("Note: mesolint applies general, population-level training guidance"), report);
+        assertFalse(Files.exists(dir.resolve("target/mesolint/cache.json")), "reports are always made afresh");
+    }
+
+    @Test
+    void anUnknownFormatIsAnExecutionErrorBeforeAnyWork() throws Exception {
+        MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
+        ReportMojo mojo = repo.report();
+        mojo.reports = List.of("pdf");
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(error.getMessage().startsWith("mesolint: reports (mesolint.reports): unknown format 'pdf'"));
+        assertFalse(Files.exists(dir.resolve("target/mesolint")));
+    }
+}
