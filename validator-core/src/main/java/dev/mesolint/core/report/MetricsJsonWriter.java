@@ -15,8 +15,10 @@ import java.lang.reflect.RecordComponent;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
@@ -30,6 +32,7 @@ public final class MetricsJsonWriter {
     public static final int FORMAT = 1;
 
     private static final JsonMapper MAPPER = JsonMapper.builder().build();
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     /** Writes {@code files} as one pretty-printed JSON document followed by a newline. */
     public void write(List<FileMetrics> files, Writer out) throws IOException {
@@ -75,7 +78,7 @@ public final class MetricsJsonWriter {
         number(node, "stimulus", m.stimulus());
         node.put("hardSessions", m.hardSessions());
         ArrayNode gaps = node.putArray("gapsHours");
-        m.gapsHours().forEach(g -> gaps.add(Numbers.round(g)));
+        m.gapsHours().forEach(g -> gaps.add(number(g)));
         number(node, "unknownEffortSets", m.unknownEffortSets());
     }
 
@@ -169,13 +172,16 @@ public final class MetricsJsonWriter {
         }
     }
 
-    /** Whole values as integers ({@code 6}, not {@code 6.0}); others rounded to three decimals. */
     private static void number(ObjectNode node, String name, double value) {
+        node.set(name, number(value));
+    }
+
+    /** Whole values as integers ({@code 6}, not {@code 6.0}); others rounded to three decimals. */
+    private static JsonNode number(double value) {
         double rounded = Numbers.round(value);
         if (rounded == Math.rint(rounded) && Math.abs(rounded) < 1e15) {
-            node.put(name, (long) rounded);
-        } else {
-            node.put(name, rounded);
+            return NODES.numberNode((long) rounded);
         }
+        return NODES.numberNode(rounded);
     }
 }
