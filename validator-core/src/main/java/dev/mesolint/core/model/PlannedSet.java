@@ -10,6 +10,6 @@ import dev.mesolint.core.programme.SetPrescription;
  * @param restAfterSeconds   rest after this set; 0 for the session's last set
  * @param round              1-based superset round, or 0 outside a superset
  */
-public record PlannedSet(ExerciseWork work, SetPrescription set, double setupSecondsBefore, double restAfterSeconds,
+record PlannedSet(ExerciseWork work, SetPrescription set, double setupSecondsBefore, double restAfterSeconds,
         int round) {
 }

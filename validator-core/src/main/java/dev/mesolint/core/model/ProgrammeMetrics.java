@@ -41,6 +41,11 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
         return new ProgrammeMetrics(programme.info().id(), units, params, new TrendCalculator(params).withTrends(weeks));
     }
 
+    /** Computes the figures with {@link ModelParameters#defaults()}. */
+    public static ProgrammeMetrics compute(Programme programme, Catalogue catalogue) {
+        return compute(programme, catalogue, ModelParameters.defaults());
+    }
+
     public Optional<WeekMetrics> week(int number) {
         return weeks.stream().filter(w -> w.number() == number).findFirst();
     }
