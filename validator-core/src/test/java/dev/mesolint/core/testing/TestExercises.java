@@ -25,7 +25,7 @@ public final class TestExercises {
     public static final Exercise LEG_EXTENSION = isolation("leg-extension", MovementPattern.KNEE_EXTENSION,
             Map.of(Muscle.QUADRICEPS, 1.0));
     public static final Exercise ROMANIAN_DEADLIFT = compound("romanian-deadlift", MovementPattern.HINGE,
-            Map.of(Muscle.HAMSTRINGS, 1.0, Muscle.GLUTES, 1.0, Muscle.LOWER_BACK, 0.5));
+            ordered(Muscle.HAMSTRINGS, 1.0, Muscle.GLUTES, 1.0, Muscle.LOWER_BACK, 0.5));
     public static final Exercise PULLDOWN = compound("lat-pulldown", MovementPattern.VERTICAL_PULL,
             Map.of(Muscle.LATS, 1.0, Muscle.BICEPS, 0.5));
     public static final Exercise PUSHDOWN = isolation("triceps-pushdown", MovementPattern.ELBOW_EXTENSION,
@@ -45,6 +45,15 @@ public final class TestExercises {
 
     public static Exercise isolation(String id, MovementPattern pattern, Map<Muscle, Double> muscles) {
         return exercise(id, ExerciseKind.ISOLATION, pattern, muscles);
+    }
+
+    /** Credits in the order written: the first muscle with credit 1 is the prime mover. */
+    static Map<Muscle, Double> ordered(Muscle m1, double c1, Muscle m2, double c2, Muscle m3, double c3) {
+        Map<Muscle, Double> map = new java.util.LinkedHashMap<>();
+        map.put(m1, c1);
+        map.put(m2, c2);
+        map.put(m3, c3);
+        return map;
     }
 
     private static Exercise exercise(String id, ExerciseKind kind, MovementPattern pattern,
