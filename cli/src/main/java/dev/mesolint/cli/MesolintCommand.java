@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
         description = "Checks resistance-training programmes written in YAML the way a compiler checks code.",
         footer = {"", "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage or internal error.", "",
             "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, CatalogueCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {CheckCommand.class, MetricsCommand.class, CatalogueCommand.class, CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;
 

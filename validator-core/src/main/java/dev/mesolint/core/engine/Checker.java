@@ -7,6 +7,7 @@ import dev.mesolint.core.format.CatalogueReader;
 import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.format.ProgrammeBinder;
 import dev.mesolint.core.format.Violation;
+import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.Rule;
@@ -117,10 +118,13 @@ public final class Checker {
         }
         Programme programme = bound.programme().get();
         String profile = request.configuration().profileFor(shown, programme);
-        FileScope scope = new FileScope(shown, programme, catalogue.overlay(programme.localExercises()), document,
-                profile);
+        Catalogue fileCatalogue = catalogue.overlay(programme.localExercises());
+        // The figures every rule and report reads: computed once per programme.
+        ProgrammeMetrics metrics = ProgrammeMetrics.compute(programme, fileCatalogue,
+                request.configuration().modelParameters(profile));
+        FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
         new RuleRunner(rules, request.configuration()).run(scope);
-        return new FileReport(shown, Optional.of(programme), profile, scope.findings());
+        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics));
     }
 
     private FileReport violationReport(String shown, Programme programme, String ruleId, List<Violation> violations) {
@@ -132,7 +136,7 @@ public final class Checker {
                 .map(v -> new Finding(ruleId, settings.severity(), shown, v.location(), v.message(), v.hint(),
                         Optional.empty()))
                 .toList();
-        return new FileReport(shown, Optional.ofNullable(programme), profile, findings);
+        return new FileReport(shown, Optional.ofNullable(programme), profile, findings, Optional.empty());
     }
 
     /** Runs the programme rules of one file in a fixed order, then reports unused waivers. */

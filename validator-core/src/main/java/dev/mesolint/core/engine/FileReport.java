@@ -2,6 +2,7 @@ package dev.mesolint.core.engine;
 
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import java.util.Comparator;
 import java.util.List;
@@ -13,8 +14,10 @@ import java.util.Optional;
  * @param displayPath the path relative to the checked root, '/'-separated
  * @param programme   present when the file loaded (even if rules then found problems)
  * @param profile     the rule profile the file was checked under
+ * @param metrics     the training-model figures, present when the programme loaded
  */
-public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings) {
+public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
+        Optional<ProgrammeMetrics> metrics) {
 
     private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
             .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)

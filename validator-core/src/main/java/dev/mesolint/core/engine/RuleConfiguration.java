@@ -1,5 +1,6 @@
 package dev.mesolint.core.engine;
 
+import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
@@ -11,6 +12,11 @@ public interface RuleConfiguration {
     String profileFor(String displayPath, Programme programme);
 
     RuleSettings settingsFor(String profile, RuleDefinition rule);
+
+    /** The training-model parameters under {@code profile}; the documented defaults unless a profile sets them. */
+    default ModelParameters modelParameters(String profile) {
+        return ModelParameters.defaults();
+    }
 
     /** Metadata defaults everywhere; the profile is named after the programme's goal. */
     RuleConfiguration DEFAULTS = new RuleConfiguration() {

@@ -2,6 +2,7 @@ package dev.mesolint.core.rule;
 
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.yaml.LocatedDocument;
@@ -24,8 +25,11 @@ public final class FileScope {
     private final List<Finding> findings = new ArrayList<>();
     private final Set<Waiver> used = Collections.newSetFromMap(new IdentityHashMap<>());
 
+    private final ProgrammeMetrics metrics;
+
     public FileScope(String displayPath, Programme programme, Catalogue catalogue, LocatedDocument document,
-            String profileName) {
+            String profileName, ProgrammeMetrics metrics) {
+        this.metrics = metrics;
         this.displayPath = displayPath;
         this.programme = programme;
         this.catalogue = catalogue;
@@ -47,6 +51,10 @@ public final class FileScope {
 
     public LocatedDocument document() {
         return document;
+    }
+
+    public ProgrammeMetrics metrics() {
+        return metrics;
     }
 
     public String profileName() {

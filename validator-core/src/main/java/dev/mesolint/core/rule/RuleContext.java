@@ -3,6 +3,7 @@ package dev.mesolint.core.rule;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.Waiver;
@@ -28,6 +29,11 @@ public final class RuleContext {
 
     public Programme programme() {
         return file.programme();
+    }
+
+    /** The training-model figures of this programme, computed once for all rules. */
+    public ProgrammeMetrics metrics() {
+        return file.metrics();
     }
 
     public Catalogue catalogue() {

@@ -1,0 +1,95 @@
+package dev.mesolint.cli;
+
+import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.RuleConfiguration;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.report.ConsoleReport;
+import dev.mesolint.core.report.FileMetrics;
+import dev.mesolint.core.report.MetricsCsvWriter;
+import dev.mesolint.core.report.MetricsJsonWriter;
+import dev.mesolint.core.report.MetricsTableFormatter;
+import dev.mesolint.core.rules.BuiltInRules;
+import dev.mesolint.core.yaml.YamlLimits;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code mesolint metrics PATH...}: the figures behind the rules, per programme, as a table, JSON or CSV. */
+@Command(name = "metrics", mixinStandardHelpOptions = true,
+        description = {"Shows what each programme is worth: credited hard sets per muscle and week, stimulating reps, "
+                + "stimulus after fatigue and diminishing returns, and session minutes.",
+            "The formulas and defaults are described in docs/model.md."},
+        footer = {"", "Caution: " + Mesolint.CAUTION})
+final class MetricsCommand implements Callable<Integer> {
+
+    @Parameters(arity = "1..*", paramLabel = "PATH", description = "Programme files or folders.")
+    List<Path> paths = new ArrayList<>();
+
+    @Option(names = "--json", paramLabel = "FILE",
+            description = "Also write the figures as JSON (per-set detail included; schema docs/schema/metrics.schema.json).")
+    Path json;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Also write one row per set as CSV, for spreadsheets.")
+    Path csv;
+
+    @Option(names = "--root", paramLabel = "DIR", description = "Show paths relative to this folder (default: the current folder).")
+    Path root;
+
+    @Option(names = "--catalogue", paramLabel = "FILE", description = "An extra catalogue file of exercises (repeatable).")
+    List<Path> catalogues = new ArrayList<>();
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        Path base = root != null ? root : Path.of("").toAbsolutePath();
+        CheckRequest request = new CheckRequest(paths, base, Severity.ERROR, catalogues, RuleConfiguration.DEFAULTS,
+                YamlLimits.DEFAULTS);
+        RunReport run = new Checker(request, BuiltInRules.all()).run();
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        run.missing().forEach(m -> err.println("mesolint: no such file or folder: " + m));
+        List<FileMetrics> measured = new ArrayList<>();
+        boolean unreadable = false;
+        for (FileReport file : run.files()) {
+            if (file.metrics().isPresent()) {
+                measured.add(new FileMetrics(file.displayPath(), file.metrics().get()));
+            } else {
+                unreadable = true;
+                file.active().forEach(f -> err.println(ConsoleReport.line(f)));
+            }
+        }
+        new MetricsTableFormatter().write(measured, out);
+        if (json != null) {
+            try (Writer w = Files.newBufferedWriter(json, StandardCharsets.UTF_8)) {
+                new MetricsJsonWriter().write(measured, w);
+            }
+        }
+        if (csv != null) {
+            try (Writer w = Files.newBufferedWriter(csv, StandardCharsets.UTF_8)) {
+                new MetricsCsvWriter().write(measured, w);
+            }
+        }
+        out.println("Note: " + Mesolint.CAUTION);
+        out.flush();
+        if (!run.missing().isEmpty()) {
+            return MesolintCommand.EXIT_USAGE;
+        }
+        return unreadable ? 1 : 0;
+    }
+}

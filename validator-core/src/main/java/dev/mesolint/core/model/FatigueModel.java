@@ -1,0 +1,32 @@
+package dev.mesolint.core.model;
+
+/**
+ * Residual fatigue a bout of reps leaves in a muscle (0 = fresh, towards 1 = nothing left), and its recovery.
+ *
+ * <p>The drive grows with reps (reps past the high-rep threshold count extra), falls off exponentially with reps in
+ * reserve, and is larger for compound lifts; fatigue = 1 - exp(-drive) keeps it below 1. Recovery is exponential
+ * with a single time constant. A project convention calibrated on the check values in docs/model.md.
+ */
+public final class FatigueModel {
+    private final ModelParameters params;
+
+    public FatigueModel(ModelParameters params) {
+        this.params = params;
+    }
+
+    /** Fatigue a bout leaves in a prime mover (credit 1), right after it. */
+    public double fatigueOf(Bout bout, boolean compound) {
+        double effectiveReps = bout.reps()
+                + params.highRepExtraWeight() * Math.max(0, bout.reps() - params.highRepThreshold());
+        double drive = params.fatiguePerRep() * effectiveReps
+                * Math.exp(-params.proximityDecay() * bout.rir())
+                * (compound ? params.compoundFatigueFactor() : 1)
+                * bout.fatigueFactor();
+        return 1 - Math.exp(-drive);
+    }
+
+    /** Fatigue left after {@code seconds} of recovery. */
+    public double remaining(double fatigue, double seconds) {
+        return fatigue * Math.exp(-seconds / params.recoveryTimeConstantSeconds());
+    }
+}

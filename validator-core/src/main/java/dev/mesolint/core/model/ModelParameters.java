@@ -1,0 +1,324 @@
+package dev.mesolint.core.model;
+
+import java.util.Objects;
+
+/**
+ * Every tunable figure of the training model, with its default and allowed bounds. docs/model.md explains each one.
+ *
+ * <p>Immutable; {@link #defaults()} meets the check values the tests hold the model to. Rule profiles override single
+ * values through {@link #toBuilder()}; the constructor refuses values outside the bounds.
+ *
+ * @param oneRepMaxRelation         relation between %1RM and reps to failure; default {@code BRZYCKI}
+ * @param effortToleranceReps       reps a load may disagree with the stated effort before it is a conflict; 2 (0..6)
+ * @param hardSetMaxRir             most reps in reserve a hard set may leave; 3 (0..5)
+ * @param amrapDefaultReps          reps assumed for an AMRAP set without a load: the model's reference set; 8 (1..50)
+ * @param stimulatingRepsCeiling    K: the last K reps before failure stimulate growth; 5 (4..6)
+ * @param recruitmentFloor          share of the motor-unit pool with no growth potential left; 0.3 (0..0.6)
+ * @param fatiguePerRep             fatigue drive of one rep at failure; 0.03 (0.005..0.1)
+ * @param proximityDecay            how fast fatigue drive falls per rep in reserve; 0.3 (0..1)
+ * @param highRepThreshold          reps from which each further rep counts extra; 15 (8..30)
+ * @param highRepExtraWeight        extra weight of each rep past the threshold; 1.0 (0..3)
+ * @param compoundFatigueFactor     fatigue multiplier for compound exercises; 1.3 (1..2)
+ * @param recoveryTimeConstantSeconds time for residual fatigue to fall to 1/e (37%); 90 s (20..600)
+ * @param techniqueFatigueFactor    fatigue multiplier for drop-set and rest-pause mini-sets; 1.5 (1..3)
+ * @param dropSetExtraReps          reps of a drop set's continuation at the lower load; 6 (1..20)
+ * @param dropSetLoadDrop           share of the load taken off for the drop; 0.2 (0.05..0.5)
+ * @param dropSetPauseSeconds       time to change the load for the drop; 10 s (0..60)
+ * @param restPauseMiniSets         mini-sets after the main set of a rest-pause set; 2 (1..5)
+ * @param restPauseMiniSetReps      reps of each rest-pause mini-set; 3 (1..10)
+ * @param restPausePauseSeconds     pause before each rest-pause mini-set; 20 s (5..60)
+ * @param diminishingReturnsScale   a in S = ln(1 + x/a) / ln(1 + 1/a); 0.25 (0.05..5)
+ * @param defaultRestSeconds        rest after a set that states none; 120 s (15..600)
+ * @param supersetChangeoverSeconds pause between items of a superset round that states none; 15 s (0..120)
+ * @param defaultRepSeconds         time of one rep without a tempo; 4 s (1..10)
+ * @param warmUpSetMinutes          minutes per warm-up set, rest included; 1.5 (0..5)
+ * @param exerciseChangeoverMinutes minutes to set up each exercise; 1.0 (0..5)
+ * @param hardSessionMinSets        credited hard sets that make a session train a muscle hard; 1.0 (0.5..5)
+ * @param acuteChronicWeeks         weeks before the current one in the chronic mean; 4 (1..8)
+ */
+public record ModelParameters(
+        OneRepMaxRelation oneRepMaxRelation,
+        double effortToleranceReps,
+        double hardSetMaxRir,
+        double amrapDefaultReps,
+        double stimulatingRepsCeiling,
+        double recruitmentFloor,
+        double fatiguePerRep,
+        double proximityDecay,
+        double highRepThreshold,
+        double highRepExtraWeight,
+        double compoundFatigueFactor,
+        double recoveryTimeConstantSeconds,
+        double techniqueFatigueFactor,
+        double dropSetExtraReps,
+        double dropSetLoadDrop,
+        double dropSetPauseSeconds,
+        int restPauseMiniSets,
+        double restPauseMiniSetReps,
+        double restPausePauseSeconds,
+        double diminishingReturnsScale,
+        double defaultRestSeconds,
+        double supersetChangeoverSeconds,
+        double defaultRepSeconds,
+        double warmUpSetMinutes,
+        double exerciseChangeoverMinutes,
+        double hardSessionMinSets,
+        int acuteChronicWeeks) {
+
+    private static final ModelParameters DEFAULTS = new Builder().build();
+
+    public ModelParameters {
+        Objects.requireNonNull(oneRepMaxRelation, "oneRepMaxRelation");
+        within("effortToleranceReps", effortToleranceReps, 0, 6);
+        within("hardSetMaxRir", hardSetMaxRir, 0, 5);
+        within("amrapDefaultReps", amrapDefaultReps, 1, 50);
+        within("stimulatingRepsCeiling", stimulatingRepsCeiling, 4, 6);
+        within("recruitmentFloor", recruitmentFloor, 0, 0.6);
+        within("fatiguePerRep", fatiguePerRep, 0.005, 0.1);
+        within("proximityDecay", proximityDecay, 0, 1);
+        within("highRepThreshold", highRepThreshold, 8, 30);
+        within("highRepExtraWeight", highRepExtraWeight, 0, 3);
+        within("compoundFatigueFactor", compoundFatigueFactor, 1, 2);
+        within("recoveryTimeConstantSeconds", recoveryTimeConstantSeconds, 20, 600);
+        within("techniqueFatigueFactor", techniqueFatigueFactor, 1, 3);
+        within("dropSetExtraReps", dropSetExtraReps, 1, 20);
+        within("dropSetLoadDrop", dropSetLoadDrop, 0.05, 0.5);
+        within("dropSetPauseSeconds", dropSetPauseSeconds, 0, 60);
+        within("restPauseMiniSets", restPauseMiniSets, 1, 5);
+        within("restPauseMiniSetReps", restPauseMiniSetReps, 1, 10);
+        within("restPausePauseSeconds", restPausePauseSeconds, 5, 60);
+        within("diminishingReturnsScale", diminishingReturnsScale, 0.05, 5);
+        within("defaultRestSeconds", defaultRestSeconds, 15, 600);
+        within("supersetChangeoverSeconds", supersetChangeoverSeconds, 0, 120);
+        within("defaultRepSeconds", defaultRepSeconds, 1, 10);
+        within("warmUpSetMinutes", warmUpSetMinutes, 0, 5);
+        within("exerciseChangeoverMinutes", exerciseChangeoverMinutes, 0, 5);
+        within("hardSessionMinSets", hardSessionMinSets, 0.5, 5);
+        within("acuteChronicWeeks", acuteChronicWeeks, 1, 8);
+    }
+
+    /** The documented defaults. */
+    public static ModelParameters defaults() {
+        return DEFAULTS;
+    }
+
+    /** A builder holding these values, to change a few of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    private static void within(String name, double value, double min, double max) {
+        if (!(value >= min && value <= max)) {
+            throw new IllegalArgumentException(name + " must lie in [" + min + ", " + max + "], was " + value);
+        }
+    }
+
+    /** Builds parameters from the defaults; each setter replaces one value. */
+    public static final class Builder {
+        private OneRepMaxRelation oneRepMaxRelation = OneRepMaxRelation.BRZYCKI;
+        private double effortToleranceReps = 2;
+        private double hardSetMaxRir = 3;
+        private double amrapDefaultReps = 8;
+        private double stimulatingRepsCeiling = 5;
+        private double recruitmentFloor = 0.3;
+        private double fatiguePerRep = 0.03;
+        private double proximityDecay = 0.3;
+        private double highRepThreshold = 15;
+        private double highRepExtraWeight = 1.0;
+        private double compoundFatigueFactor = 1.3;
+        private double recoveryTimeConstantSeconds = 90;
+        private double techniqueFatigueFactor = 1.5;
+        private double dropSetExtraReps = 6;
+        private double dropSetLoadDrop = 0.2;
+        private double dropSetPauseSeconds = 10;
+        private int restPauseMiniSets = 2;
+        private double restPauseMiniSetReps = 3;
+        private double restPausePauseSeconds = 20;
+        private double diminishingReturnsScale = 0.25;
+        private double defaultRestSeconds = 120;
+        private double supersetChangeoverSeconds = 15;
+        private double defaultRepSeconds = 4;
+        private double warmUpSetMinutes = 1.5;
+        private double exerciseChangeoverMinutes = 1.0;
+        private double hardSessionMinSets = 1.0;
+        private int acuteChronicWeeks = 4;
+
+        public Builder() {
+        }
+
+        private Builder(ModelParameters p) {
+            oneRepMaxRelation = p.oneRepMaxRelation;
+            effortToleranceReps = p.effortToleranceReps;
+            hardSetMaxRir = p.hardSetMaxRir;
+            amrapDefaultReps = p.amrapDefaultReps;
+            stimulatingRepsCeiling = p.stimulatingRepsCeiling;
+            recruitmentFloor = p.recruitmentFloor;
+            fatiguePerRep = p.fatiguePerRep;
+            proximityDecay = p.proximityDecay;
+            highRepThreshold = p.highRepThreshold;
+            highRepExtraWeight = p.highRepExtraWeight;
+            compoundFatigueFactor = p.compoundFatigueFactor;
+            recoveryTimeConstantSeconds = p.recoveryTimeConstantSeconds;
+            techniqueFatigueFactor = p.techniqueFatigueFactor;
+            dropSetExtraReps = p.dropSetExtraReps;
+            dropSetLoadDrop = p.dropSetLoadDrop;
+            dropSetPauseSeconds = p.dropSetPauseSeconds;
+            restPauseMiniSets = p.restPauseMiniSets;
+            restPauseMiniSetReps = p.restPauseMiniSetReps;
+            restPausePauseSeconds = p.restPausePauseSeconds;
+            diminishingReturnsScale = p.diminishingReturnsScale;
+            defaultRestSeconds = p.defaultRestSeconds;
+            supersetChangeoverSeconds = p.supersetChangeoverSeconds;
+            defaultRepSeconds = p.defaultRepSeconds;
+            warmUpSetMinutes = p.warmUpSetMinutes;
+            exerciseChangeoverMinutes = p.exerciseChangeoverMinutes;
+            hardSessionMinSets = p.hardSessionMinSets;
+            acuteChronicWeeks = p.acuteChronicWeeks;
+        }
+
+        public Builder oneRepMaxRelation(OneRepMaxRelation v) {
+            oneRepMaxRelation = v;
+            return this;
+        }
+
+        public Builder effortToleranceReps(double v) {
+            effortToleranceReps = v;
+            return this;
+        }
+
+        public Builder hardSetMaxRir(double v) {
+            hardSetMaxRir = v;
+            return this;
+        }
+
+        public Builder amrapDefaultReps(double v) {
+            amrapDefaultReps = v;
+            return this;
+        }
+
+        public Builder stimulatingRepsCeiling(double v) {
+            stimulatingRepsCeiling = v;
+            return this;
+        }
+
+        public Builder recruitmentFloor(double v) {
+            recruitmentFloor = v;
+            return this;
+        }
+
+        public Builder fatiguePerRep(double v) {
+            fatiguePerRep = v;
+            return this;
+        }
+
+        public Builder proximityDecay(double v) {
+            proximityDecay = v;
+            return this;
+        }
+
+        public Builder highRepThreshold(double v) {
+            highRepThreshold = v;
+            return this;
+        }
+
+        public Builder highRepExtraWeight(double v) {
+            highRepExtraWeight = v;
+            return this;
+        }
+
+        public Builder compoundFatigueFactor(double v) {
+            compoundFatigueFactor = v;
+            return this;
+        }
+
+        public Builder recoveryTimeConstantSeconds(double v) {
+            recoveryTimeConstantSeconds = v;
+            return this;
+        }
+
+        public Builder techniqueFatigueFactor(double v) {
+            techniqueFatigueFactor = v;
+            return this;
+        }
+
+        public Builder dropSetExtraReps(double v) {
+            dropSetExtraReps = v;
+            return this;
+        }
+
+        public Builder dropSetLoadDrop(double v) {
+            dropSetLoadDrop = v;
+            return this;
+        }
+
+        public Builder dropSetPauseSeconds(double v) {
+            dropSetPauseSeconds = v;
+            return this;
+        }
+
+        public Builder restPauseMiniSets(int v) {
+            restPauseMiniSets = v;
+            return this;
+        }
+
+        public Builder restPauseMiniSetReps(double v) {
+            restPauseMiniSetReps = v;
+            return this;
+        }
+
+        public Builder restPausePauseSeconds(double v) {
+            restPausePauseSeconds = v;
+            return this;
+        }
+
+        public Builder diminishingReturnsScale(double v) {
+            diminishingReturnsScale = v;
+            return this;
+        }
+
+        public Builder defaultRestSeconds(double v) {
+            defaultRestSeconds = v;
+            return this;
+        }
+
+        public Builder supersetChangeoverSeconds(double v) {
+            supersetChangeoverSeconds = v;
+            return this;
+        }
+
+        public Builder defaultRepSeconds(double v) {
+            defaultRepSeconds = v;
+            return this;
+        }
+
+        public Builder warmUpSetMinutes(double v) {
+            warmUpSetMinutes = v;
+            return this;
+        }
+
+        public Builder exerciseChangeoverMinutes(double v) {
+            exerciseChangeoverMinutes = v;
+            return this;
+        }
+
+        public Builder hardSessionMinSets(double v) {
+            hardSessionMinSets = v;
+            return this;
+        }
+
+        public Builder acuteChronicWeeks(int v) {
+            acuteChronicWeeks = v;
+            return this;
+        }
+
+        public ModelParameters build() {
+            return new ModelParameters(oneRepMaxRelation, effortToleranceReps, hardSetMaxRir, amrapDefaultReps,
+                    stimulatingRepsCeiling, recruitmentFloor, fatiguePerRep, proximityDecay, highRepThreshold,
+                    highRepExtraWeight, compoundFatigueFactor, recoveryTimeConstantSeconds, techniqueFatigueFactor,
+                    dropSetExtraReps, dropSetLoadDrop, dropSetPauseSeconds, restPauseMiniSets, restPauseMiniSetReps,
+                    restPausePauseSeconds, diminishingReturnsScale, defaultRestSeconds, supersetChangeoverSeconds,
+                    defaultRepSeconds, warmUpSetMinutes, exerciseChangeoverMinutes, hardSessionMinSets,
+                    acuteChronicWeeks);
+        }
+    }
+}

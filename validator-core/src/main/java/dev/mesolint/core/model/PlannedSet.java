@@ -1,0 +1,15 @@
+package dev.mesolint.core.model;
+
+import dev.mesolint.core.programme.ExerciseWork;
+import dev.mesolint.core.programme.SetPrescription;
+
+/**
+ * A working set in the order it is done in a session, with the time around it.
+ *
+ * @param setupSecondsBefore changeover and warm-up sets before this set (only on a work item's first set)
+ * @param restAfterSeconds   rest after this set; 0 for the session's last set
+ * @param round              1-based superset round, or 0 outside a superset
+ */
+record PlannedSet(ExerciseWork work, SetPrescription set, double setupSecondsBefore, double restAfterSeconds,
+        int round) {
+}

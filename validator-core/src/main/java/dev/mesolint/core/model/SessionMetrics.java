@@ -1,0 +1,37 @@
+package dev.mesolint.core.model;
+
+import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.source.Location;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The model's figures for one session.
+ *
+ * @param minutes    estimated duration: reps, rests, warm-up sets and changeovers
+ * @param muscles    per muscle trained, in muscle order
+ * @param sets       working sets in the order they are done (sets of exercises missing from the catalogue left out)
+ * @param volumeLoad reps x weight over the sets whose weight is known, in the programme's unit
+ */
+public record SessionMetrics(int day, String name, Location location, double minutes, Map<Muscle, MuscleSession> muscles,
+        List<SetMetrics> sets, double volumeLoad) {
+
+    public SessionMetrics {
+        muscles = muscles.isEmpty() ? Map.of() : Collections.unmodifiableMap(new EnumMap<>(muscles));
+        sets = List.copyOf(sets);
+    }
+
+    /** Credited hard sets for a muscle; 0 when the session does not train it. */
+    public double hardSets(Muscle muscle) {
+        MuscleSession m = muscles.get(muscle);
+        return m == null ? 0 : m.hardSets();
+    }
+
+    /** Stimulus for a muscle after diminishing returns; 0 when the session does not train it. */
+    public double stimulus(Muscle muscle) {
+        MuscleSession m = muscles.get(muscle);
+        return m == null ? 0 : m.stimulus();
+    }
+}

@@ -1,0 +1,86 @@
+package dev.mesolint.core.model;
+
+import dev.mesolint.core.programme.ExerciseWork;
+import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.SetPrescription;
+import dev.mesolint.core.programme.Superset;
+import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.value.Durations;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Puts a session's sets in the order they are done, with rest and set-up times.
+ *
+ * <p>Exercises run set after set, each resting its own rest (default when unstated). A superset runs round by round:
+ * item 1 set 1, item 2 set 1, rest, item 1 set 2, ... Within a round the sets' own rest is the changeover
+ * (default {@code supersetChangeoverSeconds}); after the round's last item comes the superset's rest (default rest
+ * when unstated). Each exercise costs a changeover and its warm-up sets before its work item starts.
+ */
+final class SessionPlanner {
+    private final ModelParameters params;
+
+    SessionPlanner(ModelParameters params) {
+        this.params = params;
+    }
+
+    List<PlannedSet> plan(Session session) {
+        List<PlannedSet> planned = new ArrayList<>();
+        for (WorkItem item : session.work()) {
+            if (item instanceof ExerciseWork work) {
+                planExercise(work, planned);
+            } else {
+                planSuperset((Superset) item, planned);
+            }
+        }
+        if (!planned.isEmpty()) {
+            PlannedSet last = planned.remove(planned.size() - 1);
+            planned.add(new PlannedSet(last.work(), last.set(), last.setupSecondsBefore(), 0, last.round()));
+        }
+        return List.copyOf(planned);
+    }
+
+    private void planExercise(ExerciseWork work, List<PlannedSet> planned) {
+        double setup = setupSeconds(work);
+        for (SetPrescription set : work.sets()) {
+            double rest = set.rest().map(Durations::seconds).orElse(params.defaultRestSeconds());
+            planned.add(new PlannedSet(work, set, setup, rest, 0));
+            setup = 0;
+        }
+    }
+
+    private void planSuperset(Superset superset, List<PlannedSet> planned) {
+        double setup = superset.items().stream().mapToDouble(this::setupSeconds).sum();
+        // Each item should hold one set per round; every written set is kept even when the counts differ.
+        int rounds = superset.items().stream().mapToInt(i -> i.sets().size()).max().orElse(0);
+        double roundRest = superset.rest().map(Durations::seconds).orElse(params.defaultRestSeconds());
+        for (int round = 0; round < rounds; round++) {
+            int lastItem = lastItemWithSet(superset, round);
+            for (int i = 0; i <= lastItem; i++) {
+                ExerciseWork item = superset.items().get(i);
+                if (round >= item.sets().size()) {
+                    continue;
+                }
+                SetPrescription set = item.sets().get(round);
+                double rest = i == lastItem ? roundRest
+                        : set.rest().map(Durations::seconds).orElse(params.supersetChangeoverSeconds());
+                planned.add(new PlannedSet(item, set, setup, rest, round + 1));
+                setup = 0;
+            }
+        }
+    }
+
+    private static int lastItemWithSet(Superset superset, int round) {
+        int last = -1;
+        for (int i = 0; i < superset.items().size(); i++) {
+            if (round < superset.items().get(i).sets().size()) {
+                last = i;
+            }
+        }
+        return last;
+    }
+
+    private double setupSeconds(ExerciseWork work) {
+        return 60 * (params.exerciseChangeoverMinutes() + work.warmUpSets() * params.warmUpSetMinutes());
+    }
+}

@@ -1,0 +1,70 @@
+package dev.mesolint.core.model;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.programme.Athlete;
+import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.Week;
+import dev.mesolint.core.value.LoadUnit;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/** Adds a week's sessions up per muscle; trend figures across weeks come later from {@link TrendCalculator}. */
+final class WeekCalculator {
+    private static final double HOURS_PER_DAY = 24;
+
+    private final ModelParameters params;
+    private final SessionCalculator sessions;
+
+    WeekCalculator(ModelParameters params) {
+        this.params = params;
+        this.sessions = new SessionCalculator(params);
+    }
+
+    WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
+        List<SessionMetrics> computed = week.sessions().stream()
+                .sorted(Comparator.comparingInt(Session::day))
+                .map(s -> sessions.compute(s, catalogue, athlete, units))
+                .toList();
+        Set<Muscle> trained = EnumSet.noneOf(Muscle.class);
+        computed.forEach(s -> trained.addAll(s.muscles().keySet()));
+        Map<Muscle, MuscleWeek> muscles = new EnumMap<>(Muscle.class);
+        for (Muscle muscle : trained) {
+            muscles.put(muscle, muscleWeek(muscle, computed));
+        }
+        double volumeLoad = computed.stream().mapToDouble(SessionMetrics::volumeLoad).sum();
+        return new WeekMetrics(week.number(), week.deload(), week.location(), muscles, computed, volumeLoad, Map.of(),
+                Map.of());
+    }
+
+    private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {
+        double hardSets = 0;
+        double stimulatingReps = 0;
+        double stimulus = 0;
+        double unknown = 0;
+        List<Integer> hardDays = new ArrayList<>();
+        for (SessionMetrics session : computed) {
+            MuscleSession m = session.muscles().get(muscle);
+            if (m == null) {
+                continue;
+            }
+            hardSets += m.hardSets();
+            stimulatingReps += m.stimulatingReps();
+            stimulus += m.stimulus();
+            unknown += m.unknownEffortSets();
+            if (m.hardSets() >= params.hardSessionMinSets()) {
+                hardDays.add(session.day());
+            }
+        }
+        List<Double> gaps = new ArrayList<>();
+        for (int i = 1; i < hardDays.size(); i++) {
+            gaps.add((hardDays.get(i) - hardDays.get(i - 1)) * HOURS_PER_DAY);
+        }
+        return new MuscleWeek(hardSets, stimulatingReps, stimulus, hardDays.size(), gaps, unknown);
+    }
+}
