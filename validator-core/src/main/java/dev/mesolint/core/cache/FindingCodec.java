@@ -29,13 +29,13 @@ final class FindingCodec {
         return node;
     }
 
-    /** A report without its programme: the cache keeps findings, not the loaded model. */
+    /** A report without its programme or figures: the cache keeps findings, not the loaded model. */
     static FileReport report(JsonNode node) {
         List<Finding> findings = new ArrayList<>();
         for (JsonNode f : required(node, "findings")) {
             findings.add(finding(f));
         }
-        return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings);
+        return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings, Optional.empty());
     }
 
     private static ObjectNode finding(Finding f) {
