@@ -61,7 +61,8 @@ final class HtmlStyles {
             .tick, .small { font-size: 11px; fill: var(--muted); }
             .label { font-size: 12px; fill: var(--ink); }
             .strong { font-weight: bold; }
-            .value { font-size: 11px; fill: var(--ink); }
+            .value { font-size: 11px; fill: var(--ink); paint-order: stroke; stroke: #fff; stroke-width: 3px;
+              stroke-linejoin: round; }
             .bar-ok { fill: var(--ok); }
             .bar-low { fill: var(--low); }
             .bar-high { fill: var(--high); }

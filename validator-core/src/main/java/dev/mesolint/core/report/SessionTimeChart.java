@@ -52,7 +52,7 @@ final class SessionTimeChart {
                 } else {
                     svg.rect(LABEL_W, y + 3, width, ROW_H - 6, "bar-time", tooltip);
                 }
-                svg.text(LABEL_W + width + 4, y + ROW_H - 6, note, "value", "start");
+                svg.label(LABEL_W + width + 4, y + ROW_H - 6, note, "value");
                 y += ROW_H;
             }
         }

@@ -6,6 +6,7 @@ package dev.mesolint.core.report;
  */
 final class Svg {
     private final StringBuilder out = new StringBuilder();
+    private final StringBuilder top = new StringBuilder();
 
     Svg(String id, double width, double height, String title, String description) {
         out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"chart\" role=\"img\" id=\"").append(id)
@@ -48,6 +49,13 @@ final class Svg {
         return this;
     }
 
+    /** Text painted above every shape (value labels that reference lines must not cross). */
+    Svg label(double x, double y, String text, String cssClass) {
+        top.append("<text x=\"").append(Html.px(x)).append("\" y=\"").append(Html.px(y)).append("\" class=\"")
+                .append(cssClass).append("\">").append(Html.esc(text)).append("</text>\n");
+        return this;
+    }
+
     private Svg close(String element, String tooltip) {
         if (tooltip == null) {
             out.append("/>\n");
@@ -58,7 +66,7 @@ final class Svg {
     }
 
     String end() {
-        return out.append("</svg>\n").toString();
+        return out.append(top).append("</svg>\n").toString();
     }
 
     /**

@@ -61,7 +61,7 @@ final class VolumeChart {
                 } else {
                     svg.rect(LABEL_W, by, width, BAR_H, "bar-ok", tooltip);
                 }
-                svg.text(LABEL_W + width + 4, by + BAR_H - 2, label, "value", "start");
+                svg.label(LABEL_W + width + 4, by + BAR_H - 2, label, "value");
                 by += BAR_H + BAR_GAP;
             }
             double top = y + 4;
