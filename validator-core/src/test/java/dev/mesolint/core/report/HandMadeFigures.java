@@ -16,19 +16,19 @@ class HandMadeFigures implements ProgrammeFigures {
     static final String FILE = "sample-programs/programmes/upper-lower-hypertrophy.yaml";
     static final double BUDGET = 75;
 
-    /** Weekly hard sets per muscle for weeks 1..5. */
-    static final Map<String, double[]> SETS = new LinkedHashMap<>();
-
-    static {
-        SETS.put("chest", new double[] {9, 9, 10, 10, 6});
-        SETS.put("lats", new double[] {9, 9, 10, 10, 6});
-        SETS.put("upper-back", new double[] {6, 6, 7, 7, 4});
-        SETS.put("side-delts", new double[] {6, 6, 8, 8, 4});
-        SETS.put("biceps", new double[] {3, 6, 8, 8, 4});
-        SETS.put("triceps", new double[] {6, 6, 8, 8, 4});
-        SETS.put("quadriceps", new double[] {12, 14, 18, 22, 8});
-        SETS.put("hamstrings", new double[] {9, 9, 9.5, 9.5, 6});
-        SETS.put("glutes", new double[] {7.5, 7.5, 8, 8, 5});
+    /** Weekly hard sets per muscle for weeks 1..5, in display order (a new map per call: no shared state). */
+    static Map<String, List<Double>> sets() {
+        Map<String, List<Double>> sets = new LinkedHashMap<>();
+        sets.put("chest", List.of(9.0, 9.0, 10.0, 10.0, 6.0));
+        sets.put("lats", List.of(9.0, 9.0, 10.0, 10.0, 6.0));
+        sets.put("upper-back", List.of(6.0, 6.0, 7.0, 7.0, 4.0));
+        sets.put("side-delts", List.of(6.0, 6.0, 8.0, 8.0, 4.0));
+        sets.put("biceps", List.of(3.0, 6.0, 8.0, 8.0, 4.0));
+        sets.put("triceps", List.of(6.0, 6.0, 8.0, 8.0, 4.0));
+        sets.put("quadriceps", List.of(12.0, 14.0, 18.0, 22.0, 8.0));
+        sets.put("hamstrings", List.of(9.0, 9.0, 9.5, 9.5, 6.0));
+        sets.put("glutes", List.of(7.5, 7.5, 8.0, 8.0, 5.0));
+        return sets;
     }
 
     private final String file;
@@ -56,8 +56,8 @@ class HandMadeFigures implements ProgrammeFigures {
         List<WeekFigures> weeks = new ArrayList<>();
         for (int w = 1; w <= 5; w++) {
             Map<String, MuscleWeek> muscles = new LinkedHashMap<>();
-            for (Map.Entry<String, double[]> e : SETS.entrySet()) {
-                double sets = e.getValue()[w - 1];
+            for (Map.Entry<String, List<Double>> e : sets().entrySet()) {
+                double sets = e.getValue().get(w - 1);
                 muscles.put(e.getKey(), new MuscleWeek(sets, sets * 5, sets * 4.2));
             }
             weeks.add(new WeekFigures(w, w == 5, muscles, sessions(w)));

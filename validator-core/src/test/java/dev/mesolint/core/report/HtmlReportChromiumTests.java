@@ -15,7 +15,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Assumptions;
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -30,12 +30,11 @@ import org.junit.jupiter.api.io.TempDir;
 class HtmlReportChromiumTests {
     private static final Path TARGET = Path.of("target").toAbsolutePath();
     private static final Pattern CONSOLE = Pattern.compile(":CONSOLE[:(][^\\]]*\\] (.*)");
-    private static Path chromium;
+    private static final Optional<Path> CHROMIUM = locate();
 
-    @BeforeAll
-    static void findChromium() {
-        chromium = locate().orElse(null);
-        Assumptions.assumeTrue(chromium != null,
+    @BeforeEach
+    void requireChromium() {
+        Assumptions.assumeTrue(CHROMIUM.isPresent(),
                 "Chromium not installed (apt-get install -y chromium); the browser check is skipped");
     }
 
@@ -82,7 +81,7 @@ class HtmlReportChromiumTests {
 
     /** Runs Chromium with a fresh profile under {@code temp}, which also holds its captured output. */
     private static Result run(Path temp, String... args) throws IOException, InterruptedException {
-        List<String> command = new ArrayList<>(List.of(chromium.toString(), "--headless", "--no-sandbox",
+        List<String> command = new ArrayList<>(List.of(CHROMIUM.orElseThrow().toString(), "--headless", "--no-sandbox",
                 "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
                 "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage", "--hide-scrollbars",
                 "--user-data-dir=" + temp.resolve("profile"), "--enable-logging=stderr", "--v=0"));

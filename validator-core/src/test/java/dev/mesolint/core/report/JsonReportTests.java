@@ -16,7 +16,6 @@ import java.io.InputStream;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -24,17 +23,18 @@ import tools.jackson.databind.node.ObjectNode;
 
 class JsonReportTests {
     private static final JsonMapper JSON = JsonMapper.builder().build();
-    private static Schema schema;
+    private static final Schema SCHEMA = loadSchema();
 
-    @BeforeAll
-    static void loadSchema() throws IOException {
+    private static Schema loadSchema() {
         try (InputStream in = JsonReportTests.class.getResourceAsStream("/dev/mesolint/schema/report.schema.json")) {
-            schema = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12).getSchema(in);
+            return SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12).getSchema(in);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
         }
     }
 
     private static List<String> violations(JsonNode doc) {
-        return schema.validate(doc).stream().map(com.networknt.schema.Error::toString).toList();
+        return SCHEMA.validate(doc).stream().map(com.networknt.schema.Error::toString).toList();
     }
 
     private static JsonNode json(ReportInput input) {
