@@ -21,6 +21,7 @@ final class HtmlStyles {
             .masthead { background: #22303f; color: #fff; padding: 20px 28px 16px; }
             .masthead h1 { margin: 0 0 4px; font-size: 24px; letter-spacing: .02em; }
             .masthead a { color: #cfe6ff; }
+            .masthead .path { color: #c3cfdb; }
             .masthead .verdict { display: inline-block; font-weight: bold; padding: 2px 10px; border: 2px solid #fff;
               border-radius: 3px; margin-right: 8px; }
             .masthead dl { display: flex; flex-wrap: wrap; gap: 4px 22px; margin: 10px 0 0; }
@@ -99,7 +100,7 @@ final class HtmlStyles {
             @media print {
               body { background: #fff; font-size: 11pt; }
               .masthead { background: #fff; color: #000; border-bottom: 2px solid #000; padding: 0 0 8px; }
-              .masthead a { color: #000; }
+              .masthead a, .masthead .path { color: #000; }
               .masthead .verdict { border-color: #000; }
               nav { display: none; }
               main, footer { max-width: none; padding: 0; }
