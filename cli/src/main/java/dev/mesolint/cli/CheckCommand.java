@@ -8,7 +8,9 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.ReportFiles;
+import dev.mesolint.core.report.ModelFigures;
 import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.VolumeBounds;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rules.BuiltInRules;
@@ -87,6 +89,7 @@ final class CheckCommand implements Callable<Integer> {
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
         ReportInput input = ReportInput.of(report, rules, base).withConfiguration(request.configuration())
+                .withFigures(new ModelFigures((profile, muscle) -> VolumeBounds.DEFAULTS))
                 .withElapsed(elapsed);
         for (ReportTarget target : reports) {
             try {
