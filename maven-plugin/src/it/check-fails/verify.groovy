@@ -8,4 +8,11 @@ assert log.contains("mesolint: 1 error at or above the fail level 'error' in 1 o
 assert log.indexOf('misspelt.yaml:16:23') < log.indexOf('Failed to execute goal')
 assert log.contains('MojoFailureException')
 assert !log.contains('MojoExecutionException')
+// The second build, mesolint:report, writes every report and succeeds on the same findings.
+assert log.contains('mesolint: reports written to ')
+['mesolint.txt', 'mesolint.html', 'mesolint.json', 'mesolint.sarif', 'TEST-mesolint.xml'].each {
+    assert new File(basedir, "target/mesolint/$it").length() > 0 : it
+}
+assert new File(basedir, 'target/mesolint/mesolint.txt').text.contains('block-2/misspelt.yaml:16:23: error unknown-exercise')
+assert log.contains('BUILD SUCCESS')
 return true

@@ -4,13 +4,20 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.report.ReportFormat;
+import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.ReportTarget;
+import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rules.BuiltInRules;
 import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.File;
 import java.io.IOException;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.stream.Collectors;
 import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -113,14 +120,24 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         if (OncePerBuild.first(session == null ? null : session.getRequest())) {
             getLog().info("mesolint: Note: " + Mesolint.CAUTION);
         }
-        checkParameters();
-        CachedCheck.Outcome outcome = check(useCache());
+        List<ReportTarget> targets = reportTargets();
+        boolean figures = targets.stream().anyMatch(t -> RunReports.needsFigures(t.format()));
+        if (useCache() && figures) {
+            getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
+        }
+        List<RuleDefinition> rules = BuiltInRules.all();
+        RunSettings.Prepared prepared = prepare();
+        long started = System.nanoTime();
+        CachedCheck.Outcome outcome = check(prepared, rules, useCache() && !figures);
+        if (!targets.isEmpty()) {
+            writeReports(RunReports.input(outcome.report(), rules, prepared.request(),
+                    Duration.ofNanos(System.nanoTime() - started)), targets);
+        }
         afterCheck(outcome);
     }
 
-    /** Rejects this goal's own bad parameter values before any work. */
-    void checkParameters() throws MojoExecutionException {
-    }
+    /** The report formats this goal writes, as configured. */
+    abstract List<String> reportFormats();
 
     /** Whether this goal reads and writes the result cache. */
     abstract boolean useCache();
@@ -128,10 +145,37 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     /** What the goal does with the result: log it, fail the build, write reports. */
     abstract void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException, MojoFailureException;
 
-    private CachedCheck.Outcome check(boolean cached) throws MojoExecutionException {
+    private List<ReportTarget> reportTargets() throws MojoExecutionException {
+        List<ReportTarget> targets = new ArrayList<>();
+        for (String name : reportFormats() == null ? List.<String>of() : reportFormats()) {
+            ReportFormat format = ReportFormat.parse(name).orElseThrow(() -> new MojoExecutionException(
+                    "mesolint: reports (mesolint.reports): unknown format '" + name + "'; formats: "
+                            + ReportFormat.names()));
+            targets.add(RunReports.inFolder(format, outputDirectory.toPath()));
+        }
+        return targets;
+    }
+
+    private RunSettings.Prepared prepare() throws MojoExecutionException {
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile, failOn,
                 catalogues == null ? List.of() : catalogues).prepare();
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
+        return prepared;
+    }
+
+    private void writeReports(ReportInput input, List<ReportTarget> targets) throws MojoExecutionException {
+        try {
+            RunReports.writeAll(input, targets);
+        } catch (IOException e) {
+            throw new MojoExecutionException("mesolint: cannot write the reports to " + outputDirectory + ": "
+                    + e.getMessage(), e);
+        }
+        getLog().info("mesolint: reports written to " + outputDirectory + ": " + targets.stream()
+                .map(t -> t.path().getFileName().toString()).collect(Collectors.joining(", ")));
+    }
+
+    private CachedCheck.Outcome check(RunSettings.Prepared prepared, List<RuleDefinition> rules, boolean cached)
+            throws MojoExecutionException {
         Optional<ResultCache> cache = Optional.empty();
         if (cached) {
             ResultCache opened = ResultCache.open(outputDirectory.toPath().resolve("cache.json"), prepared.key());
@@ -140,7 +184,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         }
         CachedCheck.Outcome outcome;
         try {
-            outcome = new CachedCheck(prepared.request(), BuiltInRules.all()).run(cache);
+            outcome = new CachedCheck(prepared.request(), rules).run(cache);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot read the programmes: " + e.getMessage(), e);
         }

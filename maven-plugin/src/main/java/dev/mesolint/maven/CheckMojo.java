@@ -3,10 +3,13 @@ package dev.mesolint.maven;
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Severity;
+import java.util.ArrayList;
+import java.util.List;
 import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugin.MojoFailureException;
 import org.apache.maven.plugins.annotations.LifecyclePhase;
 import org.apache.maven.plugins.annotations.Mojo;
+import org.apache.maven.plugins.annotations.Parameter;
 
 /**
  * Checks the repository's programmes and fails the build when a finding reaches the fail level. Every finding is
@@ -16,6 +19,21 @@ import org.apache.maven.plugins.annotations.Mojo;
  */
 @Mojo(name = "check", defaultPhase = LifecyclePhase.VERIFY, threadSafe = true)
 public class CheckMojo extends AbstractMesolintMojo {
+
+    /**
+     * Reports to write to the output folder as well, even when the build fails (comma-separated on the command
+     * line): {@code console}, {@code json}, {@code sarif}, {@code junit}, {@code html}. Default: none. With
+     * {@code html} or {@code json}, every programme is checked afresh (they show figures the cache does not keep).
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.reports")
+    List<String> reports = new ArrayList<>();
+
+    @Override
+    List<String> reportFormats() {
+        return reports;
+    }
 
     @Override
     boolean useCache() {

@@ -2,11 +2,6 @@ package dev.mesolint.maven;
 
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.report.ConsoleReport;
-import java.io.IOException;
-import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -16,22 +11,29 @@ import org.apache.maven.plugins.annotations.Parameter;
 
 /**
  * Writes the reports for coaches and never fails the build on findings: every programme is checked afresh and the
- * results go to the output folder. Bad configuration is still a BUILD ERROR.
+ * reports go to the output folder. Bad configuration is still a build error.
  *
  * @since 0.1.0
  */
 @Mojo(name = "report", defaultPhase = LifecyclePhase.VERIFY, threadSafe = true)
 public class ReportMojo extends AbstractMesolintMojo {
-    static final List<String> FORMATS = List.of("text");
+    static final String ALL = "console,html,json,sarif,junit";
 
     /**
-     * The report formats to write to the output folder: {@code text} ({@code mesolint.txt}, the console form with
-     * waived findings and their reasons). On the command line, comma-separated.
+     * The report formats to write to the output folder (comma-separated on the command line): {@code console}
+     * ({@code mesolint.txt}, with waived findings and their reasons), {@code html} ({@code mesolint.html}, for
+     * coaches), {@code json} ({@code mesolint.json}), {@code sarif} ({@code mesolint.sarif}), {@code junit}
+     * ({@code TEST-mesolint.xml}).
      *
      * @since 0.1.0
      */
-    @Parameter(property = "mesolint.reports", defaultValue = "text")
-    List<String> reports = new ArrayList<>(List.of("text"));
+    @Parameter(property = "mesolint.reports", defaultValue = ALL)
+    List<String> reports = new ArrayList<>(List.of(ALL.split(",")));
+
+    @Override
+    List<String> reportFormats() {
+        return reports;
+    }
 
     @Override
     boolean useCache() {
@@ -39,28 +41,8 @@ public class ReportMojo extends AbstractMesolintMojo {
     }
 
     @Override
-    void checkParameters() throws MojoExecutionException {
-        for (String format : reports) {
-            if (!FORMATS.contains(format.trim())) {
-                throw new MojoExecutionException("mesolint: reports (mesolint.reports): unknown format '" + format
-                        + "'; formats: " + String.join(", ", FORMATS));
-            }
-        }
-    }
-
-    @Override
     void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException {
         getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        Path out = outputDirectory.toPath().resolve("mesolint.txt");
-        try {
-            Files.createDirectories(out.getParent());
-            try (PrintWriter writer = new PrintWriter(Files.newBufferedWriter(out, StandardCharsets.UTF_8))) {
-                new ConsoleReport(true).write(outcome.report(), writer);
-            }
-        } catch (IOException e) {
-            throw new MojoExecutionException("mesolint: cannot write " + out + ": " + e.getMessage(), e);
-        }
-        getLog().info("mesolint: text report written to " + out);
         failOnBrokenRun(outcome);
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -71,6 +72,23 @@ class CheckMojoTests {
         MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
         assertTrue(error.getMessage().startsWith("mesolint: programmes (mesolint.programmes): no such folder"),
                 error.getMessage());
+    }
+
+    @Test
+    void aFailingCheckStillWritesTheReportsAskedFor() throws IOException {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.reports = List.of("sarif", "junit");
+        assertThrows(MojoFailureException.class, mojo::execute);
+        String sarif = Files.readString(dir.resolve("target/mesolint/mesolint.sarif"));
+        assertTrue(sarif.contains("barbel-bench-press"), sarif);
+        assertTrue(Files.readString(dir.resolve("target/mesolint/TEST-mesolint.xml")).contains("<failure"));
+
+        CheckMojo again = repo.check();
+        again.reports = List.of("sarif");
+        assertThrows(MojoFailureException.class, again::execute);
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: 2 programmes unchanged, results reused from cache"),
+                "findings-only reports keep the cache: " + repo.log.text());
     }
 
     @Test

@@ -19,8 +19,18 @@ class ReportMojoTests {
     void writesTheTextReportAndDoesNotFailOnFindings() throws Exception {
         MojoFixture repo = new MojoFixture(dir)
                 .programme("misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench"));
-        repo.report().execute();
+        ReportMojo mojo = repo.report();
+        mojo.reports = List.of(ReportMojo.ALL.split(","));
+        mojo.execute();
 
+        for (String name : List.of("mesolint.txt", "mesolint.html", "mesolint.json", "mesolint.sarif",
+                "TEST-mesolint.xml")) {
+            assertTrue(Files.size(dir.resolve("target/mesolint").resolve(name)) > 0, name);
+        }
+        assertTrue(Files.readString(dir.resolve("target/mesolint/mesolint.html")).contains("PAR-Q+"));
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: reports written to " + dir.resolve("target/mesolint")
+                + ": mesolint.txt, mesolint.html, mesolint.json, mesolint.sarif, TEST-mesolint.xml"),
+                repo.log.text());
         String report = Files.readString(dir.resolve("target/mesolint/mesolint.txt"));
         assertTrue(report.startsWith("programmes/misspelt.yaml:15:23: error unknown-exercise:"), report);
         assertTrue(report.contains("1 file checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED"), report);
@@ -34,7 +44,8 @@ class ReportMojoTests {
         ReportMojo mojo = repo.report();
         mojo.reports = List.of("pdf");
         MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
-        assertTrue(error.getMessage().startsWith("mesolint: reports (mesolint.reports): unknown format 'pdf'"));
+        assertTrue(error.getMessage().startsWith("mesolint: reports (mesolint.reports): unknown format 'pdf'; "
+                + "formats: console, json"), error.getMessage());
         assertFalse(Files.exists(dir.resolve("target/mesolint")));
     }
 }

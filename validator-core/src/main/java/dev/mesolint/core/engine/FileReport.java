@@ -27,6 +27,11 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
         findings = findings.stream().sorted(ORDER).toList();
     }
 
+    /** A report without training-model figures (the file did not load, or figures were not asked for). */
+    public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings) {
+        this(displayPath, programme, profile, findings, Optional.empty());
+    }
+
     /** Findings that count (not waived, not off). */
     public List<Finding> active() {
         return findings.stream().filter(f -> !f.waived() && f.severity() != Severity.OFF).toList();

@@ -6,6 +6,7 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
 import java.io.PrintWriter;
+import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -13,11 +14,16 @@ import java.util.List;
  * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
  * next line, then a summary and the caution. Editors and CI log parsers read the first line's form.
  */
-public final class ConsoleReport {
+public final class ConsoleReport implements ReportWriter {
     private final boolean showWaived;
 
     public ConsoleReport(boolean showWaived) {
         this.showWaived = showWaived;
+    }
+
+    @Override
+    public void write(ReportInput input, Writer out) {
+        write(input.run(), out instanceof PrintWriter p ? p : new PrintWriter(out));
     }
 
     public void write(RunReport run, PrintWriter out) {

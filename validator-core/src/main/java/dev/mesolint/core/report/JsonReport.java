@@ -1,0 +1,128 @@
+package dev.mesolint.core.report;
+
+import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.ObjectNode;
+
+/**
+ * One JSON document per run: the tool, the caution, a summary, each file's findings and, when the training model
+ * supplied them, each programme's figures under {@code metrics}. The shape is published as
+ * {@code docs/schema/report.schema.json}.
+ */
+public final class JsonReport implements ReportWriter {
+    /** The schema's {@code $id}; documents name it in {@code $schema}. */
+    public static final String SCHEMA_ID = Mesolint.INFORMATION_URI + "/schema/report.schema.json";
+    /** Raised when the document's shape changes incompatibly. */
+    public static final int FORMAT_VERSION = 1;
+
+    @Override
+    public void write(ReportInput input, Writer out) throws IOException {
+        RunReport run = input.run();
+        ObjectNode doc = JsonText.object();
+        doc.put("$schema", SCHEMA_ID);
+        doc.put("formatVersion", FORMAT_VERSION);
+        doc.putObject("tool").put("name", "mesolint").put("version", Mesolint.version())
+                .put("informationUri", Mesolint.INFORMATION_URI);
+        doc.put("caution", Mesolint.CAUTION);
+        doc.put("failOn", run.failOn().label());
+        doc.put("failed", run.failed());
+        ObjectNode summary = doc.putObject("summary");
+        summary.put("files", run.files().size());
+        summary.put("errors", run.count(Severity.ERROR));
+        summary.put("warnings", run.count(Severity.WARNING));
+        summary.put("info", run.count(Severity.INFO));
+        summary.put("waived", run.waivedCount());
+        summary.put("baselined", run.active().stream().filter(input.baseline()::contains).count());
+        ArrayNode missing = doc.putArray("missing");
+        run.missing().forEach(missing::add);
+        ArrayNode files = doc.putArray("files");
+        ArrayNode metrics = JsonText.array();
+        for (FileReport file : run.files()) {
+            files.add(file(input, file));
+            input.figures().of(file).ifPresent(f -> metrics.add(metrics(f)));
+        }
+        if (!metrics.isEmpty()) {
+            doc.set("metrics", metrics);
+        }
+        JsonText.write(doc, out);
+    }
+
+    private static ObjectNode file(ReportInput input, FileReport file) {
+        ObjectNode node = JsonText.object();
+        node.put("path", file.displayPath());
+        node.put("loaded", file.programme().isPresent());
+        node.put("profile", file.profile());
+        file.programme().ifPresent(p -> {
+            ObjectNode programme = node.putObject("programme");
+            programme.put("id", p.info().id());
+            Optional.ofNullable(p.info().title()).ifPresent(t -> programme.put("title", t));
+        });
+        ArrayNode findings = node.putArray("findings");
+        file.findings().stream().filter(f -> f.severity() != Severity.OFF)
+                .forEach(f -> findings.add(finding(input, f)));
+        return node;
+    }
+
+    private static ObjectNode finding(ReportInput input, Finding f) {
+        ObjectNode node = JsonText.object();
+        node.put("ruleId", f.ruleId());
+        node.put("severity", f.severity().label());
+        node.put("line", f.location().line());
+        node.put("column", f.location().column());
+        node.put("pointer", f.location().pointer());
+        node.put("message", f.message());
+        node.put("fix", f.fix());
+        node.put("helpUri", RuleDocs.uri(f.ruleId()));
+        node.put("fingerprint", Fingerprints.hash(f));
+        node.put("baselined", input.baseline().contains(f));
+        f.waiver().ifPresent(w -> node.putObject("waiver").put("reason", w.reason())
+                .put("line", w.location().line()).put("column", w.location().column())
+                .put("wholeFile", w.wholeFile()));
+        return node;
+    }
+
+    /** The programme object of the {@code metrics} list. */
+    static ObjectNode metrics(ProgrammeFigures figures) {
+        ObjectNode node = JsonText.object();
+        node.put("file", figures.file());
+        node.put("id", figures.programmeId());
+        ArrayNode weeks = node.putArray("weeks");
+        for (WeekFigures week : figures.weeks()) {
+            ObjectNode w = weeks.addObject();
+            w.put("week", week.week());
+            ObjectNode muscles = w.putObject("muscles");
+            for (Map.Entry<String, MuscleWeek> e : week.muscles().entrySet()) {
+                muscles.putObject(e.getKey()).put("hardSets", JsonText.round(e.getValue().hardSets()))
+                        .put("stimulatingReps", JsonText.round(e.getValue().stimulatingReps()))
+                        .put("stimulus", JsonText.round(e.getValue().stimulus()));
+            }
+            ArrayNode sessions = w.putArray("sessions");
+            for (SessionFigures s : week.sessions()) {
+                ObjectNode session = sessions.addObject();
+                session.put("day", s.day());
+                session.put("name", s.name() == null ? "" : s.name());
+                session.put("minutes", JsonText.round(s.minutes()));
+                ArrayNode sets = session.putArray("sets");
+                sets(s.sets(), sets);
+            }
+        }
+        return node;
+    }
+
+    private static void sets(List<SetFigures> figures, ArrayNode sets) {
+        for (SetFigures set : figures) {
+            sets.addObject().put("exercise", set.exercise()).put("line", set.line())
+                    .put("stimulus", JsonText.round(set.stimulus()))
+                    .put("discountedStimulus", JsonText.round(set.discountedStimulus()));
+        }
+    }
+}

@@ -1,0 +1,93 @@
+package dev.mesolint.core.report;
+
+import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.model.ProgrammeMetrics;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.function.BiFunction;
+
+/**
+ * Report figures read from the training model's {@link ProgrammeMetrics}, computed once per file by the checker.
+ *
+ * <p>A set's undiscounted stimulus is what its stimulating reps would give from a fresh state (reps / K); the
+ * discounted one is the model's fatigue-adjusted stimulus, so the difference is what the sets before it cost.
+ */
+public final class ModelFigures implements ReportFigures {
+    private final BiFunction<String, String, VolumeBounds> bounds;
+
+    /** @param bounds the weekly floor and cap for (profile, muscle) */
+    public ModelFigures(BiFunction<String, String, VolumeBounds> bounds) {
+        this.bounds = bounds;
+    }
+
+    @Override
+    public Optional<ProgrammeFigures> of(FileReport file) {
+        if (file.metrics().isEmpty() || file.programme().isEmpty()) {
+            return Optional.empty();
+        }
+        ProgrammeMetrics metrics = file.metrics().get();
+        List<WeekFigures> weeks = metrics.weeks().stream().map(w -> week(w, metrics)).toList();
+        OptionalDouble budget = file.programme().get().info().sessionMinutes().map(OptionalDouble::of)
+                .orElse(OptionalDouble.empty());
+        String profile = file.profile();
+        // The floor applies only to muscles the programme trains directly (a prime mover of some set), as the
+        // weekly-volume-min rule does; muscles trained only as synergists are not expected to reach it.
+        java.util.Set<String> direct = new java.util.HashSet<>();
+        metrics.weeks().forEach(w -> w.sessions().forEach(s -> s.sets().forEach(
+                set -> set.primeMover().ifPresent(m -> direct.add(m.yamlName())))));
+        return Optional.of(new ProgrammeFigures() {
+            @Override
+            public String file() {
+                return file.displayPath();
+            }
+
+            @Override
+            public String programmeId() {
+                return metrics.programmeId();
+            }
+
+            @Override
+            public List<WeekFigures> weeks() {
+                return weeks;
+            }
+
+            @Override
+            public VolumeBounds weeklySetBounds(String muscle) {
+                VolumeBounds b = bounds.apply(profile, muscle);
+                return direct.contains(muscle) ? b : new VolumeBounds(0, b.cap());
+            }
+
+            @Override
+            public OptionalDouble sessionBudgetMinutes() {
+                return budget;
+            }
+        });
+    }
+
+    private static WeekFigures week(WeekMetrics week, ProgrammeMetrics metrics) {
+        Map<String, MuscleWeek> muscles = new LinkedHashMap<>();
+        week.muscles().forEach((Muscle m, dev.mesolint.core.model.MuscleWeek mw) -> muscles.put(m.yamlName(),
+                new MuscleWeek(mw.hardSets(), mw.stimulatingReps(), mw.stimulus())));
+        double k = metrics.parameters().stimulatingRepsCeiling();
+        return new WeekFigures(week.number(), week.deload(), muscles,
+                week.sessions().stream().map(s -> session(s, k)).toList());
+    }
+
+    private static SessionFigures session(SessionMetrics session, double k) {
+        List<SetFigures> sets = session.sets().stream().map(s -> set(s, k)).toList();
+        return new SessionFigures(session.day(), session.name() == null ? "" : session.name(),
+                session.location().line(), session.minutes(), sets);
+    }
+
+    private static SetFigures set(SetMetrics set, double k) {
+        double fresh = set.stimulatingReps() / k;
+        return new SetFigures(set.exerciseId(), set.location().line(), fresh, Math.min(fresh, set.stimulus()));
+    }
+}

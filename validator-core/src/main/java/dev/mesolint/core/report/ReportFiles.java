@@ -1,0 +1,24 @@
+package dev.mesolint.core.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/** Writes reports to files, creating their folders; shared by the CLI and the Maven plugin. */
+public final class ReportFiles {
+    private ReportFiles() {
+    }
+
+    /** Writes {@code input} in the target's format to the target's path (UTF-8), replacing any earlier file. */
+    public static void write(ReportInput input, ReportTarget target) throws IOException {
+        Path path = target.path().toAbsolutePath();
+        if (path.getParent() != null) {
+            Files.createDirectories(path.getParent());
+        }
+        try (Writer out = Files.newBufferedWriter(path, StandardCharsets.UTF_8)) {
+            target.format().writer(path).write(input, out);
+        }
+    }
+}

@@ -1,0 +1,53 @@
+package dev.mesolint.core.report;
+
+import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.rule.RuleDefinition;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.List;
+
+/**
+ * How a front end turns one run into reports: the report input every writer reads, and the file each format gets in
+ * an output folder. Shared by the command line and the Maven plugin so both report a run the same way.
+ */
+public final class RunReports {
+    private RunReports() {
+    }
+
+    /** The input for every report of {@code run}, checked under {@code request}'s configuration. */
+    public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
+            Duration elapsed) {
+        return ReportInput.of(run, rules, request.root()).withConfiguration(request.configuration())
+                .withFigures(new ModelFigures((profile, muscle) -> VolumeBounds.DEFAULTS))
+                .withElapsed(elapsed);
+    }
+
+    /** The file a format is written to in an output folder: {@code mesolint.html}, {@code TEST-mesolint.xml}, ... */
+    public static ReportTarget inFolder(ReportFormat format, Path folder) {
+        String name = switch (format) {
+            case CONSOLE -> "mesolint.txt";
+            case JSON -> "mesolint.json";
+            case SARIF -> "mesolint.sarif";
+            case JUNIT -> "TEST-mesolint.xml";
+            case HTML -> "mesolint.html";
+        };
+        return new ReportTarget(format, folder.resolve(name));
+    }
+
+    /**
+     * True for the formats that show the training model's figures (HTML charts, the JSON {@code metrics}): they need
+     * every programme loaded, so results reused from a cache, which keeps findings only, cannot feed them.
+     */
+    public static boolean needsFigures(ReportFormat format) {
+        return format == ReportFormat.HTML || format == ReportFormat.JSON;
+    }
+
+    /** Writes {@code input} to every target. */
+    public static void writeAll(ReportInput input, List<ReportTarget> targets) throws IOException {
+        for (ReportTarget target : targets) {
+            ReportFiles.write(input, target);
+        }
+    }
+}

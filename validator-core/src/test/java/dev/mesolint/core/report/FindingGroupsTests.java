@@ -1,0 +1,47 @@
+package dev.mesolint.core.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.finding.Severity;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class FindingGroupsTests {
+
+    @Test
+    void groupsTheWeekSequenceSampleByWeekAndSession() {
+        FileReport file = ReportFixtures.check("sample-programs/broken/week-sequence.yaml").files().get(0);
+        List<FindingGroups.Group> groups = FindingGroups.of(file, file.findings());
+        assertEquals(List.of("Week 1 · day 1 (Lower)", "Week 4"), groups.stream().map(FindingGroups.Group::title)
+                .toList());
+        assertEquals(1, groups.get(0).findings().size());
+        assertEquals("week-sequence", groups.get(1).findings().get(0).ruleId());
+    }
+
+    @Test
+    void usesPointersWhenTheMessageNamesNoWeekAndKeepsFileFindingsFirst() {
+        FileReport loaded = ReportFixtures.check("sample-programs/programmes/minimal-30-minutes.yaml").files().get(0);
+        var inSession = ReportFixtures.finding("unknown-exercise", Severity.ERROR, "a.yaml", 40, 13,
+                "/weeks/0/sessions/1/work/2/exercise", "unknown exercise 'x'");
+        var wholeFile = ReportFixtures.finding("unused-waiver", Severity.WARNING, "a.yaml", 3, 1, "/waivers/0",
+                "waiver for 'z' names no known rule");
+        var byMessage = ReportFixtures.finding("unknown-exercise", Severity.ERROR, "a.yaml", 40, 13,
+                "/weeks/0/sessions/1/work/2/exercise", "in week 3, unknown exercise 'x'");
+        FileReport file = new FileReport("a.yaml", loaded.programme(), loaded.profile(),
+                List.of(inSession, wholeFile, byMessage));
+        List<FindingGroups.Group> groups = FindingGroups.of(file, file.findings());
+        assertEquals(List.of("Whole programme", "Week 1 · day 3 (Thirty-minute B)", "Week 3 · day 3 (Thirty-minute B)"),
+                groups.stream().map(FindingGroups.Group::title).toList());
+    }
+
+    @Test
+    void filesThatDidNotLoadGroupByMessageOnly() {
+        FileReport file = new FileReport("b.yaml", java.util.Optional.empty(), "hypertrophy", List.of(
+                ReportFixtures.finding("schema", Severity.ERROR, "b.yaml", 9, 3, "/weeks/1/sessions/0/day",
+                        "week 2 day 9 is not a day of the week"),
+                ReportFixtures.finding("schema", Severity.ERROR, "b.yaml", 2, 1, "/programme", "needs 'goal'")));
+        assertEquals(List.of("Whole programme", "Week 2 · day 9"), FindingGroups.of(file, file.findings()).stream()
+                .map(FindingGroups.Group::title).toList());
+    }
+}
