@@ -119,10 +119,15 @@ public final class ConfigDocument {
         }
     }
 
-    /** The entry of {@code known} nearest to {@code wanted}, if any is near enough to be a likely typo. */
+    /**
+     * The entry of {@code known} nearest to {@code wanted}, if any is near enough to be a likely typo or starts with
+     * the same word ({@code fail-level} suggests {@code fail-on}).
+     */
     public static Optional<String> closest(String wanted, Collection<String> known) {
+        String firstWord = wanted.split("-")[0];
         return known.stream()
-                .filter(k -> DISTANCE.apply(k, wanted) <= Math.max(2, wanted.length() / 3))
+                .filter(k -> DISTANCE.apply(k, wanted) <= Math.max(2, wanted.length() / 3)
+                        || firstWord.length() >= 3 && k.split("-")[0].equals(firstWord))
                 .min(Comparator.comparingInt((String k) -> DISTANCE.apply(k, wanted)).thenComparing(k -> k));
     }
 }

@@ -123,7 +123,8 @@ public final class ProfileSet {
                 chain.stream().map(Profile::name).toList(), settings);
     }
 
-    private static String nameOf(ProfileRef ref, Set<String> names, Map<Path, String> files) throws ConfigProblem {
+    private static String nameOf(ProfileRef ref, Collection<String> names, Map<Path, String> files)
+            throws ConfigProblem {
         if (ref.file().isPresent()) {
             String name = files.get(ref.file().get());
             if (name == null) {
@@ -141,7 +142,7 @@ public final class ProfileSet {
 
     /** The name of the profile {@code ref} refers to; a located problem when there is none. */
     public String nameOf(ProfileRef ref) throws ConfigProblem {
-        return nameOf(ref, byName.keySet(), nameByFile);
+        return nameOf(ref, names(), nameByFile);
     }
 
     public Optional<ResolvedProfile> find(String name) {

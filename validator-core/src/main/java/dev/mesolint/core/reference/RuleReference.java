@@ -11,6 +11,9 @@ import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
 import dev.mesolint.core.rule.RuleSettings;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -24,8 +27,8 @@ import java.util.stream.Collectors;
  */
 public final class RuleReference {
     /** How to regenerate the pages, quoted in every page. */
-    public static final String REGENERATE = "mvn -o -q -B -pl validator-core test -Dtest=RuleReferenceTests "
-            + "-Dmesolint.regenerateDocs=true";
+    public static final String REGENERATE = "mvn -o -q -B -pl validator-core -am test -Dtest=RuleReferenceTests "
+            + "-Dsurefire.failIfNoSpecifiedTests=false -Dmesolint.regenerateDocs=true";
 
     private final List<? extends RuleDefinition> rules;
     private final ProfileSet profiles;
@@ -37,6 +40,34 @@ public final class RuleReference {
 
     /** A rule's failing and passing example, and what mesolint reported for the failing one. */
     public record Examples(RuleExample failing, FileReport failingReport, RuleExample passing) {
+    }
+
+    /**
+     * Each rule's examples from a fixture folder ({@code <rule-id>/failing*.yaml}, {@code passing*.yaml}; the plain
+     * {@code failing.yaml} and {@code passing.yaml} are preferred), with the failing one checked.
+     */
+    public Map<String, Examples> examples(Path fixtures) throws IOException {
+        List<RuleExample> all = new ArrayList<>();
+        for (Path p : RuleExample.find(fixtures)) {
+            all.add(RuleExample.read(p));
+        }
+        Map<String, RuleExample> failing = new LinkedHashMap<>();
+        Map<String, RuleExample> passing = new LinkedHashMap<>();
+        for (RuleExample e : all) {
+            Map<String, RuleExample> into = e.failing() ? failing : passing;
+            String plain = e.failing() ? "failing.yaml" : "passing.yaml";
+            if (!into.containsKey(e.ruleId()) || e.file().getFileName().toString().equals(plain)) {
+                into.put(e.ruleId(), e);
+            }
+        }
+        Map<Path, FileReport> reports = ExampleRun.check(List.copyOf(failing.values()), fixtures, rules);
+        Map<String, Examples> examples = new LinkedHashMap<>();
+        failing.forEach((id, f) -> {
+            if (passing.containsKey(id) && reports.containsKey(f.file())) {
+                examples.put(id, new Examples(f, reports.get(f.file()), passing.get(id)));
+            }
+        });
+        return examples;
     }
 
     /** Every page by file name: {@code <rule-id>.md} and {@code README.md}. */

@@ -58,7 +58,7 @@ final class RestGaps {
                                 + ", the " + context.profileName() + " profile asks for at least " + seconds(min)
                                 + " after " + limit.after();
                         String fix = "rest: " + context.shown(limit.parameter())
-                                + (gap.inSuperset() ? " on the superset (the rest after each round)" : "");
+                                + (gap.inSuperset() ? " on the superset, the rest after each round" : "");
                         found.add(week, session, gap.work().exerciseId(), gap.where(), gap.waivers(), gap.step(),
                                 detail, fix);
                     }

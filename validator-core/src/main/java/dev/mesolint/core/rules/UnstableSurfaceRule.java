@@ -21,7 +21,7 @@ public final class UnstableSurfaceRule implements Rule {
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "Exercises on an unstable surface (catalogue stability: unstable), which are low-yield for hypertrophy "
                     + "and strength.",
-            Severity.WARNING, RuleMetadata.Category.SAFETY, List.of(),
+            Severity.WARNING, RuleMetadata.Category.EFFORT, List.of(),
             "On a ball, dome, board or straps much of the effort goes into balance: the load that can be handled "
                     + "drops, and with it how hard the target muscle can be driven. For building muscle or maximal "
                     + "strength a stable version of the movement does more with the same effort. Balance and "
