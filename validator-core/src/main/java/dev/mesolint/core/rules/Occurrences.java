@@ -11,6 +11,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.TreeSet;
 
 /**
@@ -18,7 +19,8 @@ import java.util.TreeSet;
  * weeks, day and sets it covers: a problem on a line that four repeated weeks copy is one finding, not four.
  *
  * <p>Occurrences are merged only when they share the place, the waivers in force and the wording, so a waiver
- * written in one repeated week still applies to that week alone. Confined to one rule run.
+ * written in one repeated week still applies to that week alone; weeks are merged only when the same sets are
+ * affected, so a deload week with one set fewer gets its own finding. Confined to one rule run.
  */
 final class Occurrences {
     private final Map<Key, Group> groups = new LinkedHashMap<>();
@@ -38,9 +40,9 @@ final class Occurrences {
     private static final class Group {
         final Location where;
         final String day;
-        final Set<Integer> weeks = new TreeSet<>();
         final String noun;
-        final Set<String> steps = new LinkedHashSet<>();
+        /** The steps affected in each week, weeks in order. */
+        final Map<Integer, Set<String>> steps = new TreeMap<>();
 
         Group(Location where, String day, String noun) {
             this.where = where;
@@ -59,34 +61,37 @@ final class Occurrences {
             String detail, String fix) {
         Group g = groups.computeIfAbsent(new Key(where.pointer(), waivers, subject, detail, fix),
                 k -> new Group(where, session.label(), step.noun()));
-        g.weeks.add(week.number());
+        Set<String> steps = g.steps.computeIfAbsent(week.number(), w -> new LinkedHashSet<>());
         if (!step.label().isEmpty()) {
-            g.steps.add(step.label());
+            steps.add(step.label());
         }
     }
 
-    /** Reports one finding per place: {@code subject, weeks 1-4 day 1 (Lower), sets 1-3: detail}. */
+    /** Reports one finding per place and set of steps: {@code subject, weeks 1-4 day 1 (Lower), sets 1-3: detail}. */
     void reportAll(RuleContext context) {
         for (Map.Entry<Key, Group> e : groups.entrySet()) {
             Key k = e.getKey();
             Group g = e.getValue();
-            String message = k.subject() + ", " + (g.weeks.size() == 1 ? "week " : "weeks ") + ranges(g.weeks) + " "
-                    + g.day + steps(g) + ": " + k.detail();
-            context.report(g.where, k.waivers(), message, k.fix());
+            Map<List<String>, Set<Integer>> weeksBySteps = new LinkedHashMap<>();
+            g.steps.forEach((week, steps) -> weeksBySteps.computeIfAbsent(List.copyOf(steps), s -> new TreeSet<>())
+                    .add(week));
+            weeksBySteps.forEach((steps, weeks) -> context.report(g.where, k.waivers(), k.subject() + ", "
+                    + (weeks.size() == 1 ? "week " : "weeks ") + ranges(weeks) + " " + g.day + steps(g.noun, steps)
+                    + ": " + k.detail(), k.fix()));
         }
     }
 
-    private static String steps(Group g) {
-        if (g.steps.isEmpty()) {
+    private static String steps(String singular, List<String> steps) {
+        if (steps.isEmpty()) {
             return "";
         }
-        String noun = g.steps.size() == 1 ? g.noun : g.noun + "s";
-        if (g.steps.stream().allMatch(s -> s.matches("\\d+"))) {
+        String noun = steps.size() == 1 ? singular : singular + "s";
+        if (steps.stream().allMatch(s -> s.matches("\\d+"))) {
             Set<Integer> numbers = new TreeSet<>();
-            g.steps.forEach(s -> numbers.add(Integer.parseInt(s)));
+            steps.forEach(s -> numbers.add(Integer.parseInt(s)));
             return ", " + noun + " " + ranges(numbers);
         }
-        return ", " + noun + " " + String.join(", ", g.steps);
+        return ", " + noun + " " + String.join(", ", steps);
     }
 
     /** {@code 1-4, 6} for 1, 2, 3, 4, 6. */

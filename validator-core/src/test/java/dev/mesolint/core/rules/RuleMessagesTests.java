@@ -28,7 +28,8 @@ class RuleMessagesTests {
     void check() throws IOException {
         List<RuleExample> examples = new ArrayList<>();
         for (String f : List.of("short-rest-compound/failing.yaml", "short-rest-compound/failing-strength.yaml",
-                "short-rest-compound/failing-superset.yaml", "short-rest-isolation/failing.yaml",
+                "short-rest-compound/failing-superset.yaml", "short-rest-compound/failing-deload-week.yaml",
+                "short-rest-isolation/failing.yaml",
                 "fatigue-technique/failing.yaml", "fatigue-technique/failing-general-fitness.yaml",
                 "unstable-surface/failing.yaml", "slow-concentric/failing.yaml", "constraint-avoid/failing.yaml",
                 "no-deload/failing.yaml")) {
@@ -63,6 +64,15 @@ class RuleMessagesTests {
                         + "round + 30 s of changeovers), the hypertrophy profile asks for at least 120 s after "
                         + "compound sets (fix: rest: 2min on the superset, the rest after each round)"),
                 superset.stream().map(RuleMessagesTests::text).sorted().toList());
+    }
+
+    @Test
+    void weeksWithDifferentSetsAreReportedApart() {
+        assertEquals(List.of("barbell-bench-press, week 1 day 1, sets 1 -> 2, 2 -> 3, 3 -> cable-triceps-pushdown: "
+                + "rest 90 s, the hypertrophy profile asks for at least 120 s after compound sets",
+                "barbell-bench-press, week 2 day 1, sets 1 -> 2, 2 -> cable-triceps-pushdown: rest 90 s, the "
+                        + "hypertrophy profile asks for at least 120 s after compound sets"),
+                found("short-rest-compound/failing-deload-week.yaml").stream().map(Finding::message).toList());
     }
 
     @Test
