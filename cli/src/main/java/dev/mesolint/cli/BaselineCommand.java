@@ -37,6 +37,9 @@ final class BaselineCommand implements Callable<Integer> {
     @Mixin
     ConfigOptions options;
 
+    @Mixin
+    ConfigOptions.Catalogues catalogues;
+
     @Option(names = "--output", paramLabel = "FILE",
             description = "Where to write (default: baseline in the configuration, else " + DEFAULT_FILE
                     + " in the root).")
@@ -49,7 +52,7 @@ final class BaselineCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(Optional.empty(), Optional.empty()),
+            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, Optional.empty(), Optional.empty()),
                     installed.rules());
             RunReport report = new Checker(workspace.request(paths), installed.rules()).run();
             if (!report.missing().isEmpty()) {

@@ -37,6 +37,9 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     ConfigOptions options;
 
+    @Mixin
+    ConfigOptions.Catalogues catalogues;
+
     @Option(names = "--fail-on", paramLabel = "LEVEL",
             description = "Exit 1 when a finding reaches this level: error, warning or info "
                     + "(default: fail-on in the configuration, else error).")
@@ -67,7 +70,7 @@ final class CheckCommand implements Callable<Integer> {
         RunReport report;
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(level, Optional.ofNullable(baseline)),
+            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, level, Optional.ofNullable(baseline)),
                     installed.rules());
             report = new Checker(workspace.request(paths), installed.rules()).run();
             Optional<Path> baselineFile = noBaseline ? Optional.empty() : workspace.baselineFile();

@@ -29,12 +29,16 @@ final class ConfigOptions {
                     + "general-fitness) or a team profile file. Overrides the goal and the configuration.")
     String profile;
 
-    @Option(names = "--catalogue", paramLabel = "FILE",
-            description = "An extra catalogue file of exercises (repeatable); entries replace built-in ones by id.")
-    List<Path> catalogues = new ArrayList<>();
-
-    RunOptions toRunOptions(Optional<Severity> failOn, Optional<Path> baseline) {
+    RunOptions toRunOptions(List<Path> catalogues, Optional<Severity> failOn, Optional<Path> baseline) {
         return new RunOptions(root != null ? root : Path.of(""), Optional.ofNullable(config),
                 Optional.ofNullable(profile), failOn, catalogues, baseline);
+    }
+
+    /** {@code --catalogue}, for the commands that check programmes. */
+    static final class Catalogues {
+        @Option(names = "--catalogue", paramLabel = "FILE",
+                description = "An extra catalogue file of exercises (repeatable); entries replace built-in ones by "
+                        + "id.")
+        List<Path> files = new ArrayList<>();
     }
 }

@@ -1,5 +1,6 @@
 package dev.mesolint.cli;
 
+import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.InstalledRules;
@@ -18,7 +19,8 @@ import picocli.CommandLine.Parameters;
 /** {@code mesolint explain RULE-ID}: a rule's reference page. */
 @Command(name = "explain", mixinStandardHelpOptions = true,
         description = {"Prints a rule's reference page: what it checks, its severity and parameters in each built-in "
-                + "profile, why, the source, and examples.", "The same pages are in docs/rules/ of the project."})
+                + "profile, why, the source, and examples.", "The same pages are in docs/rules/ of the project."},
+        footer = {"", "Caution: " + Mesolint.CAUTION})
 final class ExplainCommand implements Callable<Integer> {
     /** Where the build puts the generated pages of docs/rules/ in the core jar. */
     static final String PAGES = "/dev/mesolint/reference/rules/";
@@ -46,7 +48,8 @@ final class ExplainCommand implements Callable<Integer> {
         }
         String page;
         try (InputStream in = ExplainCommand.class.getResourceAsStream(PAGES + ruleId + ".md")) {
-            page = in != null && installed.pack(ruleId).isEmpty()
+            // Built-in rules have a generated page in the jar; a pack rule's page is built from its metadata.
+            page = in != null
                     ? new String(in.readAllBytes(), StandardCharsets.UTF_8)
                     : new RuleReference(installed.rules(), ProfileSet.builtIn(installed.rules()))
                             .page(rule.get(), Optional.empty());

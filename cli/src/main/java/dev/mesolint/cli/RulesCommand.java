@@ -8,6 +8,7 @@ import dev.mesolint.core.profile.ResolvedProfile;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
@@ -33,7 +34,7 @@ final class RulesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(Optional.empty(), Optional.empty()),
+            Workspace workspace = Workspace.open(options.toRunOptions(List.of(), Optional.empty(), Optional.empty()),
                     installed.rules());
             ResolvedProfile profile = workspace.profiles().get(workspace.defaultProfile());
             out.println("Rules in the " + profile.name() + " profile"
