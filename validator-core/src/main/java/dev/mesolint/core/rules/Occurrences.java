@@ -28,10 +28,6 @@ final class Occurrences {
     /** Which set or round of an exercise an occurrence is about: {@code set 2 -> 3}, {@code round 1}. */
     record Step(String noun, String label) {
         static final Step NONE = new Step("", "");
-
-        static Step set(int number) {
-            return new Step("set", Integer.toString(number));
-        }
     }
 
     private record Key(String pointer, List<Waiver> waivers, String subject, String detail, String fix) {
