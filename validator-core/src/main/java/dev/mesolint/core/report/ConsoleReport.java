@@ -10,7 +10,8 @@ import java.io.Writer;
 
 /**
  * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
- * next line, then a summary and the caution. Editors and CI log parsers read the first line's form.
+ * next line, then a summary and the caution. Editors and CI log parsers read the first line's form. Findings held
+ * by the baseline are shown on one line marked {@code baselined}, without their fix, and are not counted.
  */
 public final class ConsoleReport implements ReportWriter {
     private final boolean showWaived;
@@ -31,6 +32,9 @@ public final class ConsoleReport implements ReportWriter {
                     continue;
                 }
                 out.println(line(f));
+                if (f.baselined() && !f.waived()) {
+                    continue;
+                }
                 out.println("    fix: " + f.fix());
                 f.waiver().ifPresent(w -> out.println("    waived at line " + w.location().line() + ": " + w.reason()));
             }
@@ -42,14 +46,17 @@ public final class ConsoleReport implements ReportWriter {
 
     public static String line(Finding f) {
         return f.file() + ":" + f.location().line() + ":" + f.location().column() + ": "
-                + (f.waived() ? "waived " : "") + f.severity().label() + " " + f.ruleId() + ": " + f.message();
+                + (f.waived() ? "waived " : f.baselined() ? "baselined " : "") + f.severity().label() + " "
+                + f.ruleId() + ": " + f.message();
     }
 
     static String summary(RunReport run) {
         long files = run.files().size();
-        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s", files,
+        long baselined = run.baselinedCount();
+        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s%s", files,
                 files == 1 ? "" : "s", run.count(Severity.ERROR), run.count(Severity.ERROR) == 1 ? "" : "s",
                 run.count(Severity.WARNING), run.count(Severity.WARNING) == 1 ? "" : "s", run.count(Severity.INFO),
-                run.waivedCount(), run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
+                run.waivedCount(), baselined == 0 ? "" : ", " + baselined + " baselined",
+                run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
     }
 }

@@ -3,7 +3,10 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.util.List;
 
-/** The built-in rules, in reference order: one explicit, immutable list. */
+/**
+ * The built-in rules, in reference order: one explicit, immutable list. Team rules come from rule packs
+ * ({@link dev.mesolint.core.rule.RulePack}), never from here.
+ */
 public final class BuiltInRules {
     private BuiltInRules() {
     }
@@ -14,6 +17,14 @@ public final class BuiltInRules {
                 new SchemaRule(),
                 new UnknownExerciseRule(),
                 new WeekSequenceRule(),
-                new UnusedWaiverRule());
+                new ShortRestCompoundRule(),
+                new ShortRestIsolationRule(),
+                new FatigueTechniqueRule(),
+                new NoDeloadRule(),
+                new UnstableSurfaceRule(),
+                new SlowConcentricRule(),
+                new ConstraintAvoidRule(),
+                new UnusedWaiverRule(),
+                new InternalErrorRule());
     }
 }
