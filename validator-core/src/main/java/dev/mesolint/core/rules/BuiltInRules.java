@@ -14,6 +14,19 @@ public final class BuiltInRules {
                 new SchemaRule(),
                 new UnknownExerciseRule(),
                 new WeekSequenceRule(),
+                new EffortMissingRule(),
+                new EffortConflictRule(),
+                new FarFromFailureRule(),
+                new HighRepFatigueRule(),
+                new LowYieldSetRule(),
+                new SessionMuscleVolumeRule(),
+                new WeeklyVolumeMaxRule(),
+                new WeeklyVolumeMinRule(),
+                new VolumeSpikeRule(),
+                new RecoveryGapRule(),
+                new SessionTimeRule(),
+                new NoviceHeavyComplexRule(),
+                new ConstraintLoadRule(),
                 new UnusedWaiverRule());
     }
 }
