@@ -16,9 +16,17 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
-/** No set loads a region above the share of 1RM the athlete's clinician capped it at. */
+/**
+ * No set loads a region above the share of 1RM the athlete's clinician capped it at.
+ *
+ * <p>Two severities: a set over the cap takes the rule's configured severity ({@code error}); a set of a capped
+ * region whose load cannot be told is at most a {@code warning}.
+ */
 public final class ConstraintLoadRule implements Rule {
     public static final String ID = "constraint-load";
+    /** Loads are compared to a hundredth of a percent: 70% written is not "over" a 70% cap. */
+    private static final double ROUNDING = 1e-4;
+    private static final String CLINICIAN = "; any change to the cap is for the athlete's clinician to decide";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "No set loads a region above the athlete's cap for it (athlete.constraints[].max-load), whether the load "
@@ -30,8 +38,10 @@ public final class ConstraintLoadRule implements Rule {
                     + "through the model's %1RM relation (Brzycki by default: 8 reps at RIR 2 is a 10-rep effort, "
                     + "about 75% of 1RM). Every exercise whose catalogue entry loads the region counts. Inferred "
                     + "loads are estimates and reserve estimates can be off by two reps or more, so stay clear of the "
-                    + "cap rather than on it. mesolint checks the programme against the cap and never sets or "
-                    + "relaxes it: defer to the athlete's physician or physiotherapist, and local licensed practice.",
+                    + "cap rather than on it. A set of a capped region whose load nothing tells (a weight without the "
+                    + "athlete's 1RM and no reserve, or no effort at all) cannot be checked and is reported as a "
+                    + "warning. mesolint checks the programme against the cap and never sets or relaxes it: defer to "
+                    + "the athlete's physician or physiotherapist, and local licensed practice.",
             "The athlete's clinician (the cap); Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7 and "
                     + "Brzycki 1993 (%1RM from reps); Hackett et al. 2017, JSCR 31:2162-2168 (reserve estimates)");
 
@@ -40,8 +50,11 @@ public final class ConstraintLoadRule implements Rule {
         return METADATA;
     }
 
-    /** A set over a cap: its share of 1RM, whether that share is inferred, and the constraint it breaks. */
-    private record Hit(double share, boolean inferred, AthleteConstraint constraint, Region region) {
+    /**
+     * A set over a cap, or one whose load cannot be told: its share of 1RM (empty when unknown), whether that share
+     * is inferred from reps and reserve, and the constraint.
+     */
+    private record Hit(OptionalDouble share, boolean inferred, AthleteConstraint constraint, Region region) {
     }
 
     @Override
@@ -58,25 +71,32 @@ public final class ConstraintLoadRule implements Rule {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
                     Optional<Exercise> exercise = context.exercise(set.exerciseId());
-                    OptionalDouble share = share(set, relation);
-                    if (exercise.isEmpty() || share.isEmpty()) {
+                    if (exercise.isEmpty()) {
                         continue;
                     }
+                    OptionalDouble share = share(set, relation);
                     boolean inferred = set.effort().loadFraction().isEmpty();
                     for (AthleteConstraint cap : caps) {
                         Region region = cap.region().get();
-                        if (exercise.get().regions().contains(region) && share.getAsDouble() > cap.maxLoad().get() + 1e-9) {
-                            Location where = inferred ? EffortText.effortLocation(context, set)
-                                    : context.fieldLocation(set.prescription(), "load");
-                            groups.add(week, session, set, where, List.of(region, Texts.percent(share.getAsDouble())),
-                                    new Hit(share.getAsDouble(), inferred, cap, region));
+                        boolean over = share.isEmpty() || share.getAsDouble() > cap.maxLoad().get() + ROUNDING;
+                        if (exercise.get().regions().contains(region) && over) {
+                            Location where = set.prescription().load().isPresent()
+                                    ? context.fieldLocation(set.prescription(), "load")
+                                    : EffortText.effortLocation(context, set);
+                            String key = region + " " + (share.isPresent() ? Texts.percent(share.getAsDouble()) : "?");
+                            groups.add(week, session, set, where, key, new Hit(share, inferred, cap, region));
                         }
                     }
                 }
             }
         }
         for (SetGroups.Group<Hit> group : groups.groups()) {
-            report(context, relation, group);
+            Hit hit = group.values().get(0);
+            if (hit.share().isPresent()) {
+                reportOver(context, relation, group, hit);
+            } else {
+                reportUnknown(context, group, hit);
+            }
         }
     }
 
@@ -91,26 +111,53 @@ public final class ConstraintLoadRule implements Rule {
         return OptionalDouble.of(Relations.shareFor(relation, set.reps() + set.rir().getAsDouble()));
     }
 
-    private static void report(RuleContext context, OneRepMaxRelation relation, SetGroups.Group<Hit> group) {
+    private static void reportOver(RuleContext context, OneRepMaxRelation relation, SetGroups.Group<Hit> group,
+            Hit hit) {
         SetMetrics set = group.first();
-        Hit hit = group.values().get(0);
+        double share = hit.share().getAsDouble();
         double cap = hit.constraint().maxLoad().get();
-        String region = hit.region().yamlName();
         String load = hit.inferred()
-                ? "about " + Texts.percent(hit.share()) + " of 1RM, inferred from "
-                        + EffortText.prescription(set.prescription()) + " (a " + Texts.num(set.reps()
-                        + set.rir().getAsDouble()) + "-rep effort, " + Relations.name(relation) + ")"
-                : Texts.percent(hit.share()) + " of 1RM" + (set.prescription().load().filter(
-                        l -> !l.toString().endsWith("%")).map(l -> " (" + l + ")").orElse(""));
-        double lightest = relation.repsToFailure(cap);
-        String fix = hit.inferred()
-                ? "keep reps + rir at " + Texts.num(Math.ceil(lightest)) + " or more (e.g. rir: "
-                        + Texts.num(Math.max(0, Math.ceil(lightest - set.reps()))) + "), or state load: "
-                        + Texts.loadStepDown(cap)
-                : "load: " + Texts.loadStepDown(cap) + " or lighter";
-        group.report(context, context.severity(), group.label() + ": load " + load
-                + " is above the athlete's " + Texts.percent(cap) + " cap for the " + region + " (reason given: "
-                + hit.constraint().reason() + "); this exercise loads the " + region,
-                fix + "; any change to the cap is for the athlete's clinician to decide");
+                ? "about " + Texts.percent(share) + " of 1RM, inferred from "
+                        + EffortText.prescription(set.prescription()) + " ("
+                        + Texts.effort(set.reps() + set.rir().getAsDouble()) + ", " + Relations.name(relation) + ")"
+                : Texts.percent(share) + " of 1RM" + set.prescription().load()
+                        .filter(l -> !l.toString().endsWith("%")).map(l -> " (" + l + ")").orElse("");
+        String fix;
+        if (!hit.inferred()) {
+            fix = "load: " + Texts.loadStepDown(cap) + " or lighter";
+        } else {
+            // The lightest effort that stays within the cap: the reps to failure the capped load allows.
+            int effort = (int) Math.ceil(relation.repsToFailure(cap) - ROUNDING);
+            int reps = set.prescription().reps().amrap() ? (int) Math.floor(set.reps())
+                    : set.prescription().reps().max();
+            int rir = Math.max(0, effort - reps);
+            fix = (set.prescription().reps().amrap() ? "reps: " + reps + " with " : "") + "rir: " + rir + " ("
+                    + Texts.effort(reps + rir) + " or longer), or state load: " + Texts.loadStepDown(cap);
+        }
+        group.report(context, context.severity(), group.label() + ": load " + load + " is above "
+                + cap(hit, cap), fix + CLINICIAN);
+    }
+
+    /** A set of a capped region whose load nothing tells: it cannot be checked, which matters for a safety limit. */
+    private static void reportUnknown(RuleContext context, SetGroups.Group<Hit> group, Hit hit) {
+        SetMetrics set = group.first();
+        double cap = hit.constraint().maxLoad().get();
+        String why = set.prescription().load().isPresent()
+                ? set.prescription().load().get() + " without the athlete's 1RM for " + set.exerciseId()
+                        + " and without a stated reserve"
+                : "no load and no reserve stated";
+        String fix = set.prescription().load().isPresent()
+                ? "add " + set.exerciseId() + " to athlete.one-rep-max, or state rir: on these sets"
+                : "state load: " + Texts.loadStepDown(cap) + " or lighter, or rir: on these sets";
+        Severity severity = context.severity().compareTo(Severity.WARNING) >= 0 ? context.severity()
+                : Severity.WARNING;
+        group.report(context, severity, group.label() + ": the load cannot be checked against "
+                + cap(hit, cap) + ": " + why, fix + CLINICIAN);
+    }
+
+    private static String cap(Hit hit, double cap) {
+        String region = hit.region().yamlName();
+        return "the athlete's " + Texts.percent(cap) + " cap for the " + region + " (reason given: "
+                + hit.constraint().reason() + "); this exercise loads the " + region;
     }
 }

@@ -70,8 +70,8 @@ public final class HighRepFatigueRule implements Rule {
             Severity severity = compound ? context.severity() : lessSevere(context.severity(), Severity.INFO);
             double effort = set.reps() + set.rir().getAsDouble();
             group.report(context, severity, group.label() + ": "
-                    + EffortText.prescription(set.prescription()) + " is a " + Texts.num(effort)
-                    + "-rep effort taken close to failure on " + (compound ? "a compound" : "an isolation")
+                    + EffortText.prescription(set.prescription()) + " is " + Texts.effort(effort)
+                    + " taken close to failure on " + (compound ? "a compound" : "an isolation")
                     + " lift; the " + context.profileName() + " profile flags sets of " + context.shown(MIN_EFFORT_REPS)
                     + " or more reps to failure taken to RIR " + context.shown(MAX_RIR) + " or closer",
                     "reps: 8-12 with a heavier load, or rir: " + ((int) Math.floor(maxRir) + 1)

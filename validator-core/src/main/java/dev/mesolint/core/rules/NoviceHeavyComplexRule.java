@@ -73,13 +73,13 @@ public final class NoviceHeavyComplexRule implements Rule {
             int lightest = (int) max + 1;
             int rir = (int) Math.max(0, Math.ceil(lightest - set.reps()));
             group.report(context, context.severity(), group.label() + ": "
-                    + EffortText.prescription(set.prescription()) + " is a " + Texts.num(effort) + "-rep effort (about "
+                    + EffortText.prescription(set.prescription()) + " is " + Texts.effort(effort) + " (about "
                     + Texts.percent(Relations.shareFor(relation, effort)) + " of 1RM) on a high-skill lift in a novice "
                     + "programme; the " + context.profileName() + " profile keeps novices above "
                     + context.shown(MAX_EFFORT_REPS) + " reps to failure on such lifts",
                     (set.prescription().load().isPresent() ? "load: " + Relations.loadFor(relation, lightest)
                             + " with " : "") + "rir: " + rir + " (" + Texts.num(set.reps()) + " reps + " + rir
-                            + " in reserve = a " + lightest + "-rep effort, about " + Relations.loadFor(relation,
+                            + " in reserve = " + Texts.effort(lightest) + ", about " + Relations.loadFor(relation,
                             lightest) + " of 1RM), or a lower-skill variation until the technique is sound");
         }
     }

@@ -27,6 +27,18 @@ final class Texts {
         return num(Math.floor(fraction * 1000 / 25) * 2.5) + "%";
     }
 
+    /** {@code a 7-rep effort}, {@code an 11-rep effort}: the article for a number read aloud. */
+    static String article(String number) {
+        boolean vowel = number.startsWith("8") || number.matches("1[18](\\.\\d+)?");
+        return vowel ? "an" : "a";
+    }
+
+    /** {@code a 7-rep effort}, {@code an 11-rep effort}: reps to failure of a set, reps plus reserve. */
+    static String effort(double repsToFailure) {
+        String n = num(repsToFailure);
+        return article(n) + " " + n + "-rep effort";
+    }
+
     static String muscle(Muscle muscle) {
         return muscle.yamlName();
     }
