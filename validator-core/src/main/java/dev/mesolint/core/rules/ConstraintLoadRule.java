@@ -149,10 +149,8 @@ public final class ConstraintLoadRule implements Rule {
         String fix = set.prescription().load().isPresent()
                 ? "add " + set.exerciseId() + " to athlete.one-rep-max, or state rir: on these sets"
                 : "state load: " + Texts.loadStepDown(cap) + " or lighter, or rir: on these sets";
-        Severity severity = context.severity().compareTo(Severity.WARNING) >= 0 ? context.severity()
-                : Severity.WARNING;
-        group.report(context, severity, group.label() + ": the load cannot be checked against "
-                + cap(hit, cap) + ": " + why, fix + CLINICIAN);
+        group.report(context, Severities.atMost(context.severity(), Severity.WARNING), group.label()
+                + ": the load cannot be checked against " + cap(hit, cap) + ": " + why, fix + CLINICIAN);
     }
 
     private static String cap(Hit hit, double cap) {

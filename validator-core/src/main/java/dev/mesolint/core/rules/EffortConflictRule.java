@@ -12,6 +12,8 @@ import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.value.RirRange;
+import dev.mesolint.core.value.Rpe;
 import java.util.List;
 
 /**
@@ -31,11 +33,12 @@ public final class EffortConflictRule implements Rule {
             "A set that gives both a load and a reserve says the same thing twice, and the two must fit the "
                     + "published relation between %1RM and reps to failure (NSCA Table 17.7; Brzycki by default). A "
                     + "load that allows fewer reps than prescribed cannot be done as written and is always an error, "
-                    + "whatever severity the profile gives the rule (a profile can only turn the rule off). A load that "
-                    + "leaves far more reps in reserve than stated (mislabelled), a load that fits the reps but not "
-                    + "the reserve, and RIR and RPE that disagree are reported at the rule's severity (warning). Reps "
-                    + "at a given %1RM vary between people and exercises, and reserve estimates err by more than two "
-                    + "reps far from failure, so the model's tolerance (effortToleranceReps, 2 reps) is allowed first.",
+                    + "whatever severity the profile gives the rule (a profile can only turn the rule off). A load "
+                    + "that leaves far more reps in reserve than stated (mislabelled), a load that fits the reps but "
+                    + "not the reserve, and RIR and RPE that disagree are reported at the rule's severity (warning). "
+                    + "Reps at a given %1RM vary between people and exercises, and reserve estimates err by more than "
+                    + "two reps far from failure, so the model's tolerance (effortToleranceReps, 2 reps) is allowed "
+                    + "first.",
             "Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7; Brzycki 1993; Zourdos et al. 2016, "
                     + "JSCR 30(1):267-275; Hackett et al. 2017, JSCR 31:2162-2168");
 
@@ -101,9 +104,10 @@ public final class EffortConflictRule implements Rule {
         return switch (a.status()) {
             case INFEASIBLE, HARDER_THAN_STATED -> {
                 int reps = (int) Math.max(1, Math.floor(a.repsToFailure().getAsDouble() - reserve));
-                String target = p.reps().max() + " reps" + (reserve > 0 ? " at " + Texts.num(reserve) + " in reserve" : "");
-                yield "load: " + Relations.loadFor(relation, p.reps().max() + reserve) + " for " + target + ", or reps: "
-                        + reps + " at this load";
+                String target = p.reps().max() + " reps"
+                        + (reserve > 0 ? " at " + Texts.num(reserve) + " in reserve" : "");
+                yield "load: " + Relations.loadFor(relation, p.reps().max() + reserve) + " for " + target
+                        + ", or reps: " + reps + " at this load";
             }
             case MISLABELLED -> "load: " + Relations.loadFor(relation, set.reps() + a.statedRir().getAsDouble())
                     + " to leave " + Texts.num(a.statedRir().getAsDouble()) + " in reserve, or rir: "
@@ -116,6 +120,6 @@ public final class EffortConflictRule implements Rule {
 
     /** The least reserve the set states: its RIR's lower end, else its RPE read as RIR. */
     private static double leastStated(SetPrescription p) {
-        return p.rir().map(r -> r.min()).orElseGet(() -> p.rpe().map(r -> r.repsInReserve()).orElse(0.0));
+        return p.rir().map(RirRange::min).orElseGet(() -> p.rpe().map(Rpe::repsInReserve).orElse(0.0));
     }
 }

@@ -48,27 +48,31 @@ public final class FarFromFailureRule implements Rule {
                 for (SetMetrics set : session.sets()) {
                     if (set.effortKnown() && set.rir().getAsDouble() >= minRir) {
                         groups.add(week, session, set, EffortText.effortLocation(context, set),
-                                Texts.num(set.rir().getAsDouble()) + EffortText.prescription(set.prescription()), set);
+                                EffortText.prescription(set.prescription()), set);
                     }
                 }
             }
         }
         for (SetGroups.Group<SetMetrics> group : groups.groups()) {
             SetMetrics set = group.first();
-            double rir = set.rir().getAsDouble();
+            String written = EffortText.prescription(set.prescription());
+            String rir = Texts.num(set.rir().getAsDouble());
             String measured = set.effortSource() == EffortSource.LOAD
-                    ? EffortText.prescription(set.prescription()) + " leaves about " + Texts.num(rir)
-                            + " reps in reserve"
-                    : EffortText.prescription(set.prescription()) + " stops " + Texts.num(rir) + " reps short of failure";
-            group.report(context, context.severity(), group.label() + ": " + measured
-                    + "; the " + context.profileName() + " profile counts sets " + context.shown(MIN_RIR)
-                    + " or more reps short as giving next to no stimulus",
-                    set.effortSource() == EffortSource.LOAD
-                            ? "a heavier load, e.g. load: " + Relations.loadFor(
-                                    context.metrics().parameters().oneRepMaxRelation(), set.reps() + 2)
-                                    + " for " + Texts.num(set.reps()) + " reps at about 2 in reserve"
-                            : (set.effortSource() == EffortSource.RPE ? "rpe: 8" : "rir: 2")
-                                    + " with a load that leaves about two reps in reserve, or write them as warm-up sets");
+                    ? written + " leaves about " + rir + " reps in reserve"
+                    : written + " stops " + rir + " reps short of failure";
+            group.report(context, context.severity(), group.label() + ": " + measured + "; the "
+                    + context.profileName() + " profile counts sets " + context.shown(MIN_RIR)
+                    + " or more reps short as giving next to no stimulus", fix(context, set));
         }
+    }
+
+    private static String fix(RuleContext context, SetMetrics set) {
+        return switch (set.effortSource()) {
+            case LOAD -> "a heavier load, e.g. load: "
+                    + Relations.loadFor(context.metrics().parameters().oneRepMaxRelation(), set.reps() + 2) + " for "
+                    + Texts.num(set.reps()) + " reps at about 2 in reserve";
+            case RPE -> "rpe: 8 with a load that leaves about two reps in reserve, or write them as warm-up sets";
+            default -> "rir: 2 with a load that leaves about two reps in reserve, or write them as warm-up sets";
+        };
     }
 }

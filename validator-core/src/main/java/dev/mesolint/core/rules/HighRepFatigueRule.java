@@ -67,19 +67,16 @@ public final class HighRepFatigueRule implements Rule {
         for (SetGroups.Group<SetMetrics> group : groups.groups()) {
             SetMetrics set = group.first();
             boolean compound = context.exercise(set.exerciseId()).map(Exercise::isCompound).orElse(false);
-            Severity severity = compound ? context.severity() : lessSevere(context.severity(), Severity.INFO);
+            Severity severity = compound ? context.severity() : Severities.atMost(context.severity(), Severity.INFO);
             double effort = set.reps() + set.rir().getAsDouble();
             group.report(context, severity, group.label() + ": "
                     + EffortText.prescription(set.prescription()) + " is " + Texts.effort(effort)
                     + " taken close to failure on " + (compound ? "a compound" : "an isolation")
-                    + " lift; the " + context.profileName() + " profile flags sets of " + context.shown(MIN_EFFORT_REPS)
-                    + " or more reps to failure taken to RIR " + context.shown(MAX_RIR) + " or closer",
+                    + " lift; the " + context.profileName() + " profile flags sets of "
+                    + context.shown(MIN_EFFORT_REPS) + " or more reps to failure taken to RIR "
+                    + context.shown(MAX_RIR) + " or closer",
                     "reps: 8-12 with a heavier load, or rir: " + ((int) Math.floor(maxRir) + 1)
                             + " (stop further from failure)");
         }
-    }
-
-    private static Severity lessSevere(Severity a, Severity b) {
-        return a.compareTo(b) >= 0 ? a : b;
     }
 }

@@ -71,9 +71,12 @@ public final class LowYieldSetRule implements Rule {
                 }
             }
         }
+        // Grouped per week (the figures differ from week to week), then merged where a week reads the same.
+        WeekMerge merge = new WeekMerge();
         for (SetGroups.Group<Hit> group : groups.groups()) {
-            report(context, group);
+            add(context, merge, group);
         }
+        merge.report(context);
     }
 
     private static int earlier(RuleContext context, List<SetMetrics> sets, int index, Muscle muscle) {
@@ -86,25 +89,26 @@ public final class LowYieldSetRule implements Rule {
         return count;
     }
 
-    private static void report(RuleContext context, SetGroups.Group<Hit> group) {
+    private static void add(RuleContext context, WeekMerge merge, SetGroups.Group<Hit> group) {
         SetMetrics set = group.first();
         String muscle = Texts.muscle(set.primeMover().orElseThrow());
         List<Hit> hits = group.values();
         String restBefore = hits.stream().allMatch(h -> h.restBefore() == 0) ? "no rest"
                 : span(hits, Hit::restBefore, LowYieldSetRule::seconds) + " rest";
-        String message = group.label() + ": stimulus " + span(hits, Hit::share, LowYieldSetRule::percent)
+        String message = group.mergeableLabel() + ": stimulus " + span(hits, Hit::share, LowYieldSetRule::percent)
                 + " of what the same set gives fresh (the " + context.profileName() + " profile reports under "
                 + context.shown(MIN_SHARE) + "): the " + muscle + " starts " + (hits.size() == 1 ? "it " : "them ")
                 + span(hits, Hit::fatigue, LowYieldSetRule::percent) + " fatigued, after "
                 + span(hits, h -> h.earlierSets(), Texts::num) + " earlier "
-                + (hits.get(hits.size() - 1).earlierSets() == 1 ? "set" : "sets") + " that train it this session, with "
-                + restBefore + " before " + (hits.size() == 1 ? "it" : "each");
+                + (hits.get(hits.size() - 1).earlierSets() == 1 ? "set" : "sets")
+                + " that train it this session, with " + restBefore + " before " + (hits.size() == 1 ? "it" : "each");
         int firstSet = group.numbers().get(0);
         double shortestRest = hits.stream().mapToDouble(Hit::restBefore).min().orElse(0);
         String exercise = set.exerciseId();
         String fix;
         if (set.round() > 0) {
-            fix = "pair " + exercise + " with an exercise for another muscle in this superset, or rest: 2min after each round";
+            fix = "pair " + exercise + " with an exercise for another muscle in this superset, or rest: 2min "
+                    + "after each round";
         } else if (firstSet > 1 && shortestRest < LONG_REST_SECONDS) {
             fix = "rest: 3min between these sets, or stop " + exercise + " after set " + (firstSet - 1);
         } else if (firstSet > 1) {
@@ -113,7 +117,7 @@ public final class LowYieldSetRule implements Rule {
             fix = "do " + exercise + " earlier in the session, before the exercises that tire the " + muscle
                     + ", or rest longer before it";
         }
-        group.report(context, context.severity(), message, fix);
+        group.add(merge, context.severity(), message, fix);
     }
 
     /** The figure of the first and last hit: {@code 24%}, or {@code 27% to 12%}. */

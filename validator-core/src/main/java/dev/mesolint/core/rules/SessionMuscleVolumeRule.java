@@ -50,9 +50,9 @@ public final class SessionMuscleVolumeRule implements Rule {
                     Map<String, Double> credited = Contributions.of(context, List.of(session), muscle);
                     double over = Math.ceil(sets - max);
                     Places.addSession(context, merge, week, session, Places.session(session) + ": "
-                            + Texts.sets(sets) + " for the " + Texts.muscle(muscle) + " (" + Contributions.text(credited)
-                            + "), over the " + context.shown(MAX_SETS) + " per session the " + context.profileName()
-                            + " profile allows",
+                            + Texts.sets(sets) + " for the " + Texts.muscle(muscle) + " ("
+                            + Contributions.text(credited) + "), over the " + context.shown(MAX_SETS)
+                            + " per session the " + context.profileName() + " profile allows",
                             "move " + Texts.num(over) + " of the " + Texts.muscle(muscle)
                                     + " sets to another day, e.g. from " + Contributions.largest(credited));
                 }

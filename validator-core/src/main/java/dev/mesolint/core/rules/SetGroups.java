@@ -37,12 +37,27 @@ final class SetGroups<T> {
 
         /** {@code barbell-back-squat, weeks 1-4 day 2, sets 1-3}. */
         String label() {
-            return first().exerciseId() + ", " + Texts.weeks(weeks) + " day " + session.day() + ", "
-                    + Texts.sets(numbers());
+            return label(Texts.weeks(weeks));
+        }
+
+        private String label(String weeksText) {
+            return first().exerciseId() + ", " + weeksText + " day " + session.day() + ", " + Texts.sets(numbers());
+        }
+
+        /** {@link #label()} with {@link WeekMerge#WEEKS} for the weeks, for a group kept to one week. */
+        String mergeableLabel() {
+            return label(WeekMerge.WEEKS);
         }
 
         void report(RuleContext context, Severity severity, String message, String fix) {
             context.report(where, first().prescription().waivers(), severity, message, fix);
+        }
+
+        /** Adds the finding to {@code merge}, which names every week whose finding reads the same. */
+        void add(WeekMerge merge, Severity severity, String message, String fix) {
+            for (int week : weeks) {
+                merge.add(week, where, first().prescription().waivers(), severity, message, fix);
+            }
         }
     }
 

@@ -10,8 +10,8 @@ import java.util.Map;
 import java.util.TreeSet;
 
 /**
- * Reports a rule's per-session findings once per written place: a repeated week copies the sessions it repeats, so
- * the same finding would otherwise come back once per week. Findings at the same place, with the same waivers, severity,
+ * Reports a rule's findings once per written place: a repeated week copies the sessions it repeats, so the same
+ * finding would otherwise come back once per week. Findings at the same place, with the same waivers, severity,
  * message and fix are reported once, with {@link #WEEKS} in the message replaced by every week they occur in
  * ({@code week 2}, {@code weeks 1-4}). Used by one rule for one file; not shared.
  */

@@ -43,8 +43,8 @@ public final class WeeklyVolumeMaxRule implements Rule {
                     + "Strength blocks often give the squat, bench press and deadlift muscles more practice, so the "
                     + "limit for those muscles is a separate parameter.",
             "Schoenfeld, Ogborn & Krieger 2017, J Sports Sci 35(11):1073-1082; Pelland et al. 2024 (diminishing "
-                    + "returns; fractional counting); the 20-set limit is common practice drawn from that dose-response "
-                    + "literature");
+                    + "returns; fractional counting); the 20-set limit is common practice drawn from that "
+                    + "dose-response literature");
 
     @Override
     public RuleMetadata metadata() {
