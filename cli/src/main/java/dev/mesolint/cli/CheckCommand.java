@@ -1,28 +1,29 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
-import dev.mesolint.core.engine.RuleConfiguration;
+import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
-import dev.mesolint.core.rule.RuleDefinition;
-import dev.mesolint.core.rules.BuiltInRules;
 import dev.mesolint.core.rules.InternalErrorRule;
-import dev.mesolint.core.yaml.YamlLimits;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -32,8 +33,9 @@ import picocli.CommandLine.Parameters;
             "Findings print as path:line:column: severity rule-id: message, with a fix on the next line.",
             "Reports for CI and coaches are written with --report FORMAT=PATH (repeatable), e.g.",
             "  --report sarif=target/mesolint.sarif --report html=target/mesolint.html"},
-        footer = {"", "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage or internal error.", "",
-            "Caution: " + Mesolint.CAUTION})
+        footer = {"", ConfigOptions.PRECEDENCE, "",
+            "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
+            "", "Caution: " + Mesolint.CAUTION})
 final class CheckCommand implements Callable<Integer> {
 
     /** Reads {@code FORMAT=PATH}; picocli turns the exception into a usage error with its message. */
@@ -51,19 +53,26 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "PATH", description = "Programme files or folders.")
     List<Path> paths = new ArrayList<>();
 
-    @Option(names = "--fail-on", paramLabel = "LEVEL", defaultValue = "error",
-            description = "Exit 1 when a finding reaches this level: error, warning or info (default: ${DEFAULT-VALUE}).")
+    @Mixin
+    ConfigOptions options;
+
+    @Mixin
+    ConfigOptions.Catalogues catalogues;
+
+    @Option(names = "--fail-on", paramLabel = "LEVEL",
+            description = "Exit 1 when a finding reaches this level: error, warning or info "
+                    + "(default: fail-on in the configuration, else error).")
     String failOn;
 
-    @Option(names = "--root", paramLabel = "DIR",
-            description = "Show paths relative to this folder (default: the current folder).")
-    Path root;
+    @Option(names = "--baseline", paramLabel = "FILE",
+            description = "Compare with this baseline (written by 'mesolint baseline'): findings it holds are shown "
+                    + "as baselined and not counted (default: baseline in the configuration, if any).")
+    Path baseline;
 
-    @Option(names = "--catalogue", paramLabel = "FILE",
-            description = "An extra catalogue file of exercises (repeatable); entries replace built-in ones by id.")
-    List<Path> catalogues = new ArrayList<>();
+    @Option(names = "--no-baseline", description = "Ignore the configuration's baseline: count every finding.")
+    boolean noBaseline;
 
-    @Option(names = "--show-waived", description = "Also print findings that a waiver accepts.")
+    @Option(names = "--show-waived", description = "Also print findings that a waiver accepts, with its reason.")
     boolean showWaived;
 
     @Option(names = "--report", paramLabel = "FORMAT=PATH", converter = ReportTargetConverter.class,
@@ -76,18 +85,32 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Severity level = Severity.parse(failOn).filter(s -> s != Severity.OFF).orElseThrow(() ->
-                new CommandLine.ParameterException(spec.commandLine(),
-                        "--fail-on must be error, warning or info, not '" + failOn + "'"));
-        Path base = root != null ? root : Path.of("").toAbsolutePath();
-        CheckRequest request = new CheckRequest(paths, base, level, catalogues, RuleConfiguration.DEFAULTS,
-                YamlLimits.DEFAULTS);
-        List<RuleDefinition> rules = BuiltInRules.all();
+        Optional<Severity> level = Optional.empty();
+        if (failOn != null) {
+            level = Optional.of(Severity.parse(failOn).filter(s -> s != Severity.OFF).orElseThrow(() ->
+                    new CommandLine.ParameterException(spec.commandLine(),
+                            "--fail-on must be error, warning or info, not '" + failOn + "'")));
+        }
+        RunReport report;
+        Workspace workspace;
+        CheckRequest request;
+        InstalledRules installed;
         long started = System.nanoTime();
-        RunReport report = new Checker(request, rules).run();
+        try {
+            installed = Installed.rules();
+            workspace = Workspace.open(options.toRunOptions(catalogues.files, level, Optional.ofNullable(baseline)),
+                    installed.rules());
+            request = workspace.request(paths);
+            report = new Checker(request, installed.rules()).run();
+            if (!noBaseline) {
+                report = workspace.applyBaseline(report);
+            }
+        } catch (ConfigProblem e) {
+            return Installed.fail(e, spec.commandLine().getErr());
+        }
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
-        ReportInput input = RunReports.input(report, rules, request, elapsed);
+        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed);
         for (ReportTarget target : reports) {
             try {
                 ReportFiles.write(input, target);

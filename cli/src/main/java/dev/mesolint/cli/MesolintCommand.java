@@ -10,9 +10,11 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = MesolintCommand.Version.class,
         description = "Checks resistance-training programmes written in YAML the way a compiler checks code.",
-        footer = {"", "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage or internal error.", "",
-            "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, MetricsCommand.class, CatalogueCommand.class, CommandLine.HelpCommand.class})
+        footer = {"", ConfigOptions.PRECEDENCE, "",
+            "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
+            "", "Caution: " + Mesolint.CAUTION},
+        subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
+            ExplainCommand.class, CatalogueCommand.class, CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;
 

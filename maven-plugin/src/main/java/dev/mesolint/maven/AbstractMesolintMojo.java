@@ -3,13 +3,14 @@ package dev.mesolint.maven;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.cache.ResultCache;
+import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import dev.mesolint.core.rule.RuleDefinition;
-import dev.mesolint.core.rules.BuiltInRules;
 import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.File;
 import java.io.IOException;
@@ -81,6 +82,23 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     List<File> catalogues = new ArrayList<>();
 
     /**
+     * A baseline file (written by {@code mesolint baseline}): the findings it holds are shown as baselined and do
+     * not fail the build. Default: the configuration file's {@code baseline}, else none.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.baseline")
+    File baseline;
+
+    /**
+     * Compare with no baseline, even one the configuration file names: every finding counts.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.ignoreBaseline", defaultValue = "false")
+    boolean ignoreBaseline;
+
+    /**
      * Where the reports and the result cache are written.
      *
      * @since 0.1.0
@@ -125,8 +143,8 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         if (useCache() && figures) {
             getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
         }
-        List<RuleDefinition> rules = BuiltInRules.all();
         RunSettings.Prepared prepared = prepare();
+        List<RuleDefinition> rules = prepared.rules();
         long started = System.nanoTime();
         CachedCheck.Outcome outcome = check(prepared, rules, useCache() && !figures);
         if (!targets.isEmpty()) {
@@ -158,7 +176,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
 
     private RunSettings.Prepared prepare() throws MojoExecutionException {
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile, failOn,
-                catalogues == null ? List.of() : catalogues).prepare();
+                catalogues == null ? List.of() : catalogues, baseline).prepare();
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
         return prepared;
     }
@@ -196,7 +214,17 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
                     + " unchanged, results reused from cache" + (outcome.checked() > 0 ? "; " + outcome.checked()
                     + " checked" : ""));
         }
-        return outcome;
+        if (ignoreBaseline) {
+            getLog().debug("mesolint: baseline ignored (plugin parameter ignoreBaseline)");
+            return outcome;
+        }
+        try {
+            // After the cache: it keeps the findings themselves, so editing the baseline never invalidates it.
+            RunReport compared = prepared.workspace().applyBaseline(outcome.report());
+            return new CachedCheck.Outcome(compared, outcome.reused(), outcome.checked(), outcome.unreadable());
+        } catch (ConfigProblem e) {
+            throw RunSettings.problem(e);
+        }
     }
 
     private void save(ResultCache cache) {

@@ -1,114 +1,95 @@
 package dev.mesolint.maven;
 
 import dev.mesolint.core.cache.ConfigurationKey;
+import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.engine.CheckRequest;
-import dev.mesolint.core.engine.RuleConfiguration;
+import dev.mesolint.core.engine.InstalledRules;
+import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.engine.SettingSources;
+import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
-import dev.mesolint.core.programme.Goal;
-import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.rule.RuleDefinition;
-import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.yaml.YamlLimits;
 import java.io.File;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.maven.plugin.MojoExecutionException;
 
 /**
- * The Mojo parameters that decide what is checked and how, turned into the core's request and cache key. Values
- * that are {@code null} were not set: the repository configuration or the built-in default applies.
+ * The Mojo parameters that decide what is checked and how, handed to the core's {@link Workspace} (which reads the
+ * repository configuration and lets the parameters win). Values that are {@code null} were not set.
  */
-record RunSettings(Path root, File programmes, File config, String profile, String failOn, List<File> catalogues) {
+record RunSettings(Path root, File programmes, File config, String profile, String failOn, List<File> catalogues,
+        File baseline) {
 
-    /** The request, the cache key and, for the debug log, where each value came from. */
-    record Prepared(CheckRequest request, ConfigurationKey key, List<String> sources) {
+    /** How configuration problems the core reports by command-line option are named for Maven users. */
+    private static final Map<String, String> PARAMETERS = Map.of("--config", "config (mesolint.config)",
+            "--profile", "profile (mesolint.profile)", "--baseline", "baseline (mesolint.baseline)");
+
+    /** Everything a run needs, the cache key and, for the debug log, where each setting came from. */
+    record Prepared(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, ConfigurationKey key,
+            List<String> sources) {
     }
 
     Prepared prepare() throws MojoExecutionException {
-        List<String> sources = new ArrayList<>();
         if (!programmes.exists()) {
-            throw new MojoExecutionException("mesolint: programmes (mesolint.programmes): no such folder or file: "
-                    + programmes + "; set it to the folder that holds the programme files");
+            throw error("programmes", "no such folder or file: " + programmes
+                    + "; set it to the folder that holds the programme files");
         }
-        Optional<Path> configFile = configFile(sources);
-        Severity level = failLevel(sources);
-        RuleConfiguration configuration = profileConfiguration(sources);
+        if (config != null && !config.isFile()) {
+            throw error("config", "no configuration file at " + config + "; check the path, or leave the "
+                    + "parameter out to use .mesolint.yaml in " + root);
+        }
+        if (baseline != null && !baseline.isFile()) {
+            throw error("baseline", "no baseline file at " + baseline + "; write one with 'mesolint baseline "
+                    + "PATH... --output " + baseline + "', or leave the parameter out");
+        }
         List<Path> extra = new ArrayList<>();
         for (File c : catalogues) {
             if (!c.isFile()) {
-                throw new MojoExecutionException("mesolint: catalogues (mesolint.catalogues): no such file: " + c);
+                throw error("catalogues", "no such file: " + c);
             }
             extra.add(c.toPath());
         }
-        sources.add("catalogues = " + extra + (extra.isEmpty() ? " (built-in default: none)"
-                : " (plugin parameter catalogues)"));
-        CheckRequest request = new CheckRequest(List.of(programmes.toPath()), root, level, extra, configuration,
-                YamlLimits.DEFAULTS);
+        Optional<Severity> level = Optional.empty();
+        if (failOn != null) {
+            level = Optional.of(Severity.parseFailLevel(failOn).orElseThrow(() -> error("failOn",
+                    "must be error, warning or info, not '" + failOn + "'")));
+        }
+        // A profile file named by the parameter is relative to the project folder, like every path in a POM.
+        Optional<String> forced = Optional.ofNullable(profile).map(p -> ProfileRef.of(p, root, "profile", null)
+                .file().map(Path::toString).orElse(p));
+        RunOptions options = new RunOptions(root, Optional.ofNullable(config).map(File::toPath), forced, level, extra,
+                Optional.ofNullable(baseline).map(File::toPath));
         try {
-            ConfigurationKey key = ConfigurationKey.forThisVersion().option("root", root).option("failOn", level)
-                    .option("profile", profile).file("config", configFile.orElse(null));
-            for (Path c : extra) {
-                key.file("catalogue", c);
-            }
-            return new Prepared(request, key, sources);
+            List<RuleDefinition> rules = InstalledRules.discover(RunSettings.class.getClassLoader()).rules();
+            Workspace workspace = Workspace.open(options, rules);
+            CheckRequest request = workspace.request(List.of(programmes.toPath()));
+            return new Prepared(workspace, request, rules, ConfigurationKey.of(workspace, request, rules),
+                    SettingSources.describe(workspace, name -> "plugin parameter " + name));
+        } catch (ConfigProblem e) {
+            throw problem(e);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot read a configuration file: " + e.getMessage(), e);
         }
     }
 
-    private Optional<Path> configFile(List<String> sources) throws MojoExecutionException {
-        if (config != null) {
-            if (!config.isFile()) {
-                throw new MojoExecutionException("mesolint: config (mesolint.config): no configuration file at "
-                        + config + "; check the path, or leave the parameter out to use .mesolint.yaml in "
-                        + root);
+    /** A configuration problem as a build error: {@code mesolint: file:line:column: message (fix: ...)}. */
+    static MojoExecutionException problem(ConfigProblem e) {
+        String described = e.describe();
+        for (Map.Entry<String, String> p : PARAMETERS.entrySet()) {
+            if (e.source().equals(p.getKey())) {
+                described = p.getValue() + described.substring(p.getKey().length());
             }
-            sources.add("config = " + config + " (plugin parameter config)");
-            return Optional.of(config.toPath());
         }
-        Path standard = root.resolve(".mesolint.yaml");
-        sources.add("config = " + (Files.isRegularFile(standard) ? standard + " (built-in default)"
-                : "none (no .mesolint.yaml in " + root + ")"));
-        return Files.isRegularFile(standard) ? Optional.of(standard) : Optional.empty();
+        return new MojoExecutionException("mesolint: " + described, e);
     }
 
-    private Severity failLevel(List<String> sources) throws MojoExecutionException {
-        if (failOn == null) {
-            sources.add("failOn = error (built-in default)");
-            return Severity.ERROR;
-        }
-        Severity level = Severity.parseFailLevel(failOn).orElseThrow(() -> new MojoExecutionException(
-                "mesolint: failOn (mesolint.failOn) must be error, warning or info, not '" + failOn + "'"));
-        sources.add("failOn = " + level.label() + " (plugin parameter failOn)");
-        return level;
-    }
-
-    private RuleConfiguration profileConfiguration(List<String> sources) throws MojoExecutionException {
-        if (profile == null) {
-            sources.add("profile = chosen by each programme's goal (built-in default)");
-            return RuleConfiguration.DEFAULTS;
-        }
-        List<String> names = Arrays.stream(Goal.values()).map(Goal::yamlName).toList();
-        if (!names.contains(profile)) {
-            throw new MojoExecutionException("mesolint: profile (mesolint.profile): unknown profile '" + profile
-                    + "'; profiles: " + String.join(", ", names));
-        }
-        sources.add("profile = " + profile + " (plugin parameter profile)");
-        return new RuleConfiguration() {
-            @Override
-            public String profileFor(String displayPath, Programme programme) {
-                return profile;
-            }
-
-            @Override
-            public RuleSettings settingsFor(String name, RuleDefinition rule) {
-                return RuleConfiguration.DEFAULTS.settingsFor(name, rule);
-            }
-        };
+    private static MojoExecutionException error(String parameter, String message) {
+        return new MojoExecutionException("mesolint: " + parameter + " (mesolint." + parameter + "): " + message);
     }
 }

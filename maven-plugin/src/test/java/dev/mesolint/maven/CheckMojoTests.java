@@ -46,7 +46,7 @@ class CheckMojoTests {
         mojo.execute();
         String log = repo.log.text();
         assertTrue(log.contains("[DEBUG] mesolint: failOn = warning (plugin parameter failOn)"), log);
-        assertTrue(log.contains("[DEBUG] mesolint: profile = chosen by each programme's goal (built-in default)"),
+        assertTrue(log.contains("[DEBUG] mesolint: profile = named after each programme's goal (built-in default)"),
                 log);
         assertTrue(log.contains("[INFO] mesolint: 1 file checked: 0 errors, 0 warnings, 0 info, 0 waived"), log);
     }
@@ -57,13 +57,13 @@ class CheckMojoTests {
         CheckMojo mojo = repo.check();
         mojo.failOn = "fatal";
         MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
-        assertEquals("mesolint: failOn (mesolint.failOn) must be error, warning or info, not 'fatal'",
+        assertEquals("mesolint: failOn (mesolint.failOn): must be error, warning or info, not 'fatal'",
                 error.getMessage());
 
         CheckMojo unknownProfile = repo.check();
         unknownProfile.profile = "powerbuilding";
         assertTrue(assertThrows(MojoExecutionException.class, unknownProfile::execute).getMessage()
-                .startsWith("mesolint: profile (mesolint.profile): unknown profile 'powerbuilding'"));
+                .startsWith("mesolint: profile (mesolint.profile): no profile named 'powerbuilding'"));
     }
 
     @Test

@@ -23,7 +23,7 @@ final class MojoFixture {
                     name: Upper A
                     work:
                       - exercise: barbell-bench-press
-                        sets: 3
+                        sets: 4
                         reps: 8
                         rir: 2
                         rest: 3min

@@ -1,12 +1,18 @@
 package dev.mesolint.core.cache;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleSettings;
 import java.io.IOException;
 import java.net.URISyntaxException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
 
 /**
  * Everything besides a programme's own text that can change its findings: the tool version, the rules, the option
@@ -36,6 +42,40 @@ public final class ConfigurationKey {
         } catch (IOException | URISyntaxException | RuntimeException e) {
             return "unknown";
         }
+    }
+
+    /**
+     * The key of a run in {@code workspace}: this build of mesolint, the rules, the fail level, the root, the forced
+     * profile, the contents of the configuration and catalogue files, and every profile as resolved (so an edited
+     * team profile file, or one it extends, changes the key).
+     */
+    public static ConfigurationKey of(Workspace workspace, CheckRequest request, List<RuleDefinition> rules)
+            throws IOException {
+        ConfigurationKey key = forThisVersion()
+                .option("rules", rules.stream().map(RuleDefinition::id).collect(Collectors.joining(",")))
+                .option("root", request.root())
+                .option("failOn", request.failOn().label())
+                .option("profile", workspace.options().profile().orElse(null))
+                .option("limits", request.limits())
+                .file("config", workspace.config().file().orElse(null));
+        for (Path catalogue : request.extraCatalogues()) {
+            key.file("catalogue", catalogue);
+        }
+        for (String name : workspace.profiles().names()) {
+            key.option("profile " + name, resolved(workspace, name, rules));
+        }
+        return key;
+    }
+
+    /** A profile's effective settings in a stable order (the maps' own order changes from one JVM to the next). */
+    private static String resolved(Workspace workspace, String profile, List<RuleDefinition> rules) {
+        StringBuilder out = new StringBuilder(workspace.configuration().modelParameters(profile).toString());
+        for (RuleDefinition rule : rules) {
+            RuleSettings s = workspace.configuration().settingsFor(profile, rule);
+            out.append(' ').append(rule.id()).append('=').append(s.severity().label())
+                    .append(new TreeMap<>(s.values()));
+        }
+        return out.toString();
     }
 
     /** A key as another version would make it (for tests of version changes). */

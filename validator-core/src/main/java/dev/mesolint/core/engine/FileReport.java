@@ -32,9 +32,14 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
         this(displayPath, programme, profile, findings, Optional.empty());
     }
 
-    /** Findings that count (not waived, not off). */
+    /** Findings that count (not waived, not off, not held by the baseline). */
     public List<Finding> active() {
-        return findings.stream().filter(f -> !f.waived() && f.severity() != Severity.OFF).toList();
+        return findings.stream().filter(f -> !f.waived() && !f.baselined() && f.severity() != Severity.OFF).toList();
+    }
+
+    /** Findings that the baseline holds (and no waiver accepts): shown, not counted. */
+    public List<Finding> baselined() {
+        return findings.stream().filter(f -> f.baselined() && !f.waived() && f.severity() != Severity.OFF).toList();
     }
 
     public List<Finding> waived() {

@@ -28,6 +28,10 @@ public record RunReport(List<FileReport> files, Severity failOn, List<String> mi
         return files.stream().mapToLong(f -> f.waived().size()).sum();
     }
 
+    public long baselinedCount() {
+        return files.stream().mapToLong(f -> f.baselined().size()).sum();
+    }
+
     /** True when any active finding is at or above the fail level. */
     public boolean failed() {
         return active().stream().anyMatch(f -> f.severity().atLeast(failOn));

@@ -9,14 +9,14 @@ import java.util.Set;
  */
 @FunctionalInterface
 public interface Baseline {
-    /** No baseline: every finding is new. */
-    Baseline NONE = finding -> false;
+    /** Only what the run itself marked: findings held by the baseline applied in the check ({@code --baseline}). */
+    Baseline NONE = Finding::baselined;
 
     boolean contains(Finding finding);
 
     /** A baseline of the given fingerprints, as {@link Finding#fingerprint()} returns them. */
     static Baseline of(Set<String> fingerprints) {
         Set<String> copy = Set.copyOf(fingerprints);
-        return finding -> copy.contains(finding.fingerprint());
+        return finding -> finding.baselined() || copy.contains(finding.fingerprint());
     }
 }

@@ -12,7 +12,8 @@ import java.util.List;
 
 /**
  * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
- * next line, then a summary and the caution. Editors and CI log parsers read the first line's form.
+ * next line, then a summary and the caution. Editors and CI log parsers read the first line's form. Findings held
+ * by the baseline are shown on one line marked {@code baselined}, without their fix, and are not counted.
  */
 public final class ConsoleReport implements ReportWriter {
     private final boolean showWaived;
@@ -42,13 +43,20 @@ public final class ConsoleReport implements ReportWriter {
 
     public static String line(Finding f) {
         return f.file() + ":" + f.location().line() + ":" + f.location().column() + ": "
-                + (f.waived() ? "waived " : "") + f.severity().label() + " " + f.ruleId() + ": " + f.message();
+                + (f.waived() ? "waived " : f.baselined() ? "baselined " : "") + f.severity().label() + " "
+                + f.ruleId() + ": " + f.message();
     }
 
-    /** A finding as printed: its {@link #line}, the fix, and the waiver's reason when waived. */
+    /**
+     * A finding as printed: its {@link #line}, then the fix and the waiver's reason when waived; a baselined finding
+     * is its line alone.
+     */
     public static List<String> lines(Finding f) {
         List<String> lines = new ArrayList<>();
         lines.add(line(f));
+        if (f.baselined() && !f.waived()) {
+            return lines;
+        }
         lines.add("    fix: " + f.fix());
         f.waiver().ifPresent(w -> lines.add("    waived at line " + w.location().line() + ": " + w.reason()));
         return lines;
@@ -57,9 +65,11 @@ public final class ConsoleReport implements ReportWriter {
     /** The closing count line, e.g. {@code 4 files checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED ...}. */
     public static String summary(RunReport run) {
         long files = run.files().size();
-        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s", files,
+        long baselined = run.baselinedCount();
+        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s%s", files,
                 files == 1 ? "" : "s", run.count(Severity.ERROR), run.count(Severity.ERROR) == 1 ? "" : "s",
                 run.count(Severity.WARNING), run.count(Severity.WARNING) == 1 ? "" : "s", run.count(Severity.INFO),
-                run.waivedCount(), run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
+                run.waivedCount(), baselined == 0 ? "" : ", " + baselined + " baselined",
+                run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
     }
 }

@@ -41,7 +41,8 @@ public final class JsonReport implements ReportWriter {
         summary.put("warnings", run.count(Severity.WARNING));
         summary.put("info", run.count(Severity.INFO));
         summary.put("waived", run.waivedCount());
-        summary.put("baselined", run.active().stream().filter(input.baseline()::contains).count());
+        summary.put("baselined", run.files().stream().flatMap(f -> f.findings().stream())
+                .filter(f -> !f.waived()).filter(input.baseline()::contains).count());
         ArrayNode missing = doc.putArray("missing");
         run.missing().forEach(missing::add);
         ArrayNode files = doc.putArray("files");

@@ -3,6 +3,7 @@ package dev.mesolint.core.rule;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Programme;
@@ -64,7 +65,24 @@ public final class RuleContext {
     }
 
     public void report(Location location, List<Waiver> waivers, String message, String fix) {
-        Finding finding = new Finding(rule.id(), settings.severity(), file.displayPath(), location, message, fix,
+        report(location, waivers, settings.severity(), message, fix);
+    }
+
+    /** The severity the profile gives this rule (never {@code OFF}: a rule that is off does not run). */
+    public Severity severity() {
+        return settings.severity();
+    }
+
+    /**
+     * Reports at a severity other than the configured one, for a rule whose metadata documents a second severity
+     * for one kind of finding (an infeasible load is always an error; a long isolation set is at most info). Use
+     * {@link #severity()} to derive it, so that a profile's choice still counts.
+     */
+    public void report(Location location, List<Waiver> waivers, Severity severity, String message, String fix) {
+        if (severity == Severity.OFF) {
+            return;
+        }
+        Finding finding = new Finding(rule.id(), severity, file.displayPath(), location, message, fix,
                 Optional.empty());
         file.add(finding, waivers);
     }

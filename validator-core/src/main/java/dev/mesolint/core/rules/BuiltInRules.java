@@ -3,7 +3,10 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.util.List;
 
-/** The built-in rules, in reference order: one explicit, immutable list. */
+/**
+ * The built-in rules, in reference order: one explicit, immutable list. Team rules come from rule packs
+ * ({@link dev.mesolint.core.rule.RulePack}), never from here.
+ */
 public final class BuiltInRules {
     private BuiltInRules() {
     }
@@ -14,6 +17,27 @@ public final class BuiltInRules {
                 new SchemaRule(),
                 new UnknownExerciseRule(),
                 new WeekSequenceRule(),
-                new UnusedWaiverRule());
+                new EffortMissingRule(),
+                new EffortConflictRule(),
+                new FarFromFailureRule(),
+                new ShortRestCompoundRule(),
+                new ShortRestIsolationRule(),
+                new HighRepFatigueRule(),
+                new FatigueTechniqueRule(),
+                new LowYieldSetRule(),
+                new SessionMuscleVolumeRule(),
+                new WeeklyVolumeMaxRule(),
+                new WeeklyVolumeMinRule(),
+                new RecoveryGapRule(),
+                new SessionTimeRule(),
+                new VolumeSpikeRule(),
+                new NoDeloadRule(),
+                new UnstableSurfaceRule(),
+                new NoviceHeavyComplexRule(),
+                new SlowConcentricRule(),
+                new ConstraintAvoidRule(),
+                new ConstraintLoadRule(),
+                new UnusedWaiverRule(),
+                new InternalErrorRule());
     }
 }

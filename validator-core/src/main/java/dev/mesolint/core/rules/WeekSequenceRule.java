@@ -6,6 +6,7 @@ import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
+import dev.mesolint.core.yaml.Pointers;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -35,7 +36,7 @@ public final class WeekSequenceRule implements Rule {
             Week earlier = seen.putIfAbsent(week.number(), week);
             if (earlier != null) {
                 context.report(week.numberLocation(), week.waivers(), "week " + week.number()
-                        + " is written twice (first at line " + earlier.numberLocation().line() + ")",
+                        + " is written twice (first as " + Pointers.readable(earlier.location().pointer()) + ")",
                         "renumber it week: " + expected + ", or merge the two");
             } else if (week.number() != expected) {
                 String problem = week.number() > expected
@@ -59,8 +60,9 @@ public final class WeekSequenceRule implements Rule {
         for (Session session : week.sessions()) {
             Session earlier = days.putIfAbsent(session.day(), session);
             if (earlier != null && session.dayLocation().pointer().startsWith(written)) {
-                context.report(session.dayLocation(), session.waivers(), "week " + week.number() + " has two sessions on day "
-                        + session.day() + " (the other at line " + earlier.dayLocation().line() + ")",
+                context.report(session.dayLocation(), session.waivers(), "week " + week.number()
+                        + " has two sessions on day "
+                        + session.day() + " (the other is " + Pointers.readable(earlier.location().pointer()) + ")",
                         "move one to a free day, or merge them into one session");
             }
         }

@@ -72,9 +72,9 @@ class CachedCheckTests {
         assertEquals(1, second.report().waivedCount(), "the waiver and its reason survive the cache");
         assertTrue(lines(second.report()).contains("    waived at line 19: club sled"), lines(second.report())
                 .toString());
-        assertEquals("programmes/misspelt.yaml:14:23: error unknown-exercise: unknown exercise 'barbel-bench-press';"
-                + " closest ids: barbell-bench-press, dumbbell-bench-press, barbell-push-press",
-                lines(second.report()).get(0));
+        assertTrue(lines(second.report()).contains("programmes/misspelt.yaml:14:23: error unknown-exercise: unknown "
+                + "exercise 'barbel-bench-press'; closest ids: barbell-bench-press, dumbbell-bench-press, "
+                + "barbell-push-press"), lines(second.report()).toString());
     }
 
     @Test

@@ -32,7 +32,8 @@ class CheckerTests {
 
     @Test
     void hostileFilesGetLocatedErrorsAndTheOtherFilesAreStillChecked() throws IOException {
-        Files.writeString(dir.resolve("good.yaml"), Programmes.oneWeek());
+        // Four bench sets: three would be under weekly-volume-min's four for a muscle trained directly.
+        Files.writeString(dir.resolve("good.yaml"), Programmes.oneWeek().replace("sets: 3", "sets: 4"));
         Files.writeString(dir.resolve("unknown.yaml"), Programmes.oneWeek().replace("barbell-bench-press",
                 "barbel-bench-press"));
         StringBuilder bomb = new StringBuilder("a: &a [x, x, x, x, x, x, x, x, x]\n");
@@ -72,7 +73,9 @@ class CheckerTests {
         Path samples = Path.of("..", "sample-programs", "programmes");
         RunReport run = new Checker(CheckRequest.of(List.of(samples), samples), BuiltInRules.all()).run();
         assertTrue(run.files().size() >= 4);
-        assertEquals(List.of(), run.active(), "the good samples give no finding");
+        // Information findings are allowed (e.g. long isolation sets near failure); nothing to warn about.
+        assertEquals(List.of(), run.active().stream().filter(f -> f.severity().atLeast(Severity.WARNING)).toList(),
+                "the good samples give no error or warning");
     }
 
     @Test

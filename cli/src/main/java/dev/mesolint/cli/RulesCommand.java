@@ -1,0 +1,58 @@
+package dev.mesolint.cli;
+
+import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.InstalledRules;
+import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.profile.ResolvedProfile;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleSettings;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+
+/** {@code mesolint rules}: the rules with their severity in a profile. */
+@Command(name = "rules", mixinStandardHelpOptions = true,
+        description = {"Lists every rule with its severity in a profile (off = not checked) and what it checks.",
+            "The profile is --profile, else the configuration's default profile, else hypertrophy.",
+            "See 'mesolint explain RULE-ID' for a rule's parameters, rationale and examples."},
+        footer = {"", ConfigOptions.PRECEDENCE, "", "Caution: " + Mesolint.CAUTION})
+final class RulesCommand implements Callable<Integer> {
+
+    @Mixin
+    ConfigOptions options;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        try {
+            InstalledRules installed = Installed.rules();
+            Workspace workspace = Workspace.open(options.toRunOptions(List.of(), Optional.empty(), Optional.empty()),
+                    installed.rules());
+            ResolvedProfile profile = workspace.profiles().get(workspace.defaultProfile());
+            out.println("Rules in the " + profile.name() + " profile"
+                    + (profile.chain().size() > 1 ? " (extends " + String.join(" -> ",
+                            profile.chain().subList(1, profile.chain().size())) + ")" : "") + ":");
+            out.println();
+            out.printf("%-22s %-8s %s%n", "RULE", "SEVERITY", "CHECKS");
+            for (RuleDefinition rule : installed.rules()) {
+                RuleSettings s = profile.settings(rule);
+                String pack = installed.pack(rule.id()).map(p -> " [rule pack " + p + "]").orElse("");
+                out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(), rule.metadata().summary(), pack);
+            }
+            out.println();
+            out.println("Caution: " + Mesolint.CAUTION);
+            out.flush();
+            return 0;
+        } catch (ConfigProblem e) {
+            return Installed.fail(e, spec.commandLine().getErr());
+        }
+    }
+}

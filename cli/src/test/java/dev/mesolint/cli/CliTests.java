@@ -1,0 +1,179 @@
+package dev.mesolint.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.mesolint.core.Mesolint;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CliTests {
+    @TempDir
+    Path root;
+
+    private record Run(int exit, String out, String err) {
+    }
+
+    private Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int exit = MesolintCommand.execute(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(exit, out.toString(), err.toString());
+    }
+
+    private static final String PROGRAMME = """
+            format: 1
+            programme:
+              id: harbour-cli
+              level: intermediate
+              goal: hypertrophy
+            weeks:
+              - week: 1
+                sessions:
+                  - day: 1
+                    work:
+                      - exercise: barbell-back-squat
+                        sets: 3
+                        reps: 8
+                        rir: 2
+                        rest: 90s
+                      - exercise: dumbbell-curl
+                        sets: 3
+                        reps: 12
+                        rir: 1
+                        rest: 30s
+                      - exercise: cable-crunch
+                        sets: 2
+                        reps: 12
+                        rir: 2
+                        rest: 60s
+            """;
+
+    private Path write(String name, String text) throws IOException {
+        Path file = root.resolve(name);
+        Files.createDirectories(file.getParent());
+        Files.writeString(file, text);
+        return file;
+    }
+
+    private String rootArg() {
+        return root.toString();
+    }
+
+    @Test
+    void checkReadsTheRepositoryConfigurationAndOptionsOverrideIt() throws IOException {
+        write("programmes/block.yaml", PROGRAMME);
+        Run plain = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, plain.exit(), plain.out() + plain.err());
+        assertTrue(plain.out().contains("programmes/block.yaml:15:19: warning short-rest-compound: "), plain.out());
+
+        write(".mesolint.yaml", "fail-on: warning\n");
+        assertEquals(1, run("check", "--root", rootArg(), root.resolve("programmes").toString()).exit());
+        assertEquals(0, run("check", "--root", rootArg(), "--fail-on", "error",
+                root.resolve("programmes").toString()).exit(), "the option wins over the file");
+        Run strict = run("check", "--root", rootArg(), "--fail-on", "info", "--profile", "general-fitness",
+                root.resolve("programmes").toString());
+        assertEquals(1, strict.exit());
+        assertTrue(strict.out().contains("the general-fitness profile asks"), strict.out());
+    }
+
+    @Test
+    void aBrokenConfigurationIsOneLocatedLineAndExitTwo() throws IOException {
+        write("programmes/block.yaml", PROGRAMME);
+        write(".mesolint.yaml", "profile: strength\nfail-level: warning\n");
+        Run r = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(2, r.exit());
+        assertEquals("mesolint: .mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: "
+                + "did you mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline)\n",
+                r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+
+        write("club.yaml", "profile: club\nrules:\n  short-rest-compound: {min-rest: 2 hours}\n");
+        Run p = run("check", "--root", rootArg(), "--config", root.resolve("none.yaml").toString(), "x");
+        assertEquals(2, p.exit());
+        assertTrue(p.err().startsWith("mesolint: --config: no configuration file at"), p.err());
+        Files.delete(root.resolve(".mesolint.yaml"));
+        Run bad = run("check", "--root", rootArg(), "--profile", root.resolve("club.yaml").toString(),
+                root.resolve("programmes").toString());
+        assertEquals(2, bad.exit());
+        assertTrue(bad.err().contains("club.yaml:3:35: short-rest-compound min-rest: '2 hours' is not a duration"),
+                bad.err());
+    }
+
+    @Test
+    void aBaselineHoldsTodaysFindingsSoOnlyNewOnesFail() throws IOException {
+        Path block = write("programmes/block.yaml", PROGRAMME);
+        write(".mesolint.yaml", "fail-on: info\nbaseline: .mesolint-baseline.json\n");
+        Run missing = run("check", "--root", rootArg(), block.toString());
+        assertEquals(2, missing.exit(), "a configured baseline must exist");
+        assertTrue(missing.err().contains(".mesolint-baseline.json: no baseline file"), missing.err());
+
+        Run written = run("baseline", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, written.exit(), written.err());
+        assertEquals("Wrote 2 findings from 1 file to .mesolint-baseline.json\n", written.out());
+
+        Run clean = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, clean.exit(), clean.out());
+        assertTrue(clean.out().contains("baselined warning short-rest-compound"), clean.out());
+        assertTrue(clean.out().contains("0 errors, 0 warnings, 0 info, 0 waived, 2 baselined"), clean.out());
+
+        Files.writeString(block, "# moved down by a comment\n" + PROGRAMME.replace("rest: 60s",
+                "rest: 60s\n            tempo: 2-0-4-0"));
+        Run next = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(1, next.exit());
+        assertTrue(next.out().contains("info slow-concentric"), next.out());
+        assertTrue(next.out().contains("0 errors, 0 warnings, 1 info, 0 waived, 2 baselined"), next.out());
+        assertEquals(0, run("check", "--root", rootArg(), "--no-baseline", root.resolve("programmes").toString())
+                .out().lines().filter(l -> l.contains("baselined")).count(), "nothing is baselined");
+
+        Run other = run("baseline", "--root", rootArg(), "--output", root.resolve("ci/b.json").toString(),
+                block.toString());
+        assertEquals(0, other.exit());
+        assertTrue(Files.exists(root.resolve("ci/b.json")));
+    }
+
+    @Test
+    void rulesListsSeveritiesInTheChosenProfile() {
+        Run r = run("rules", "--root", rootArg(), "--profile", "general-fitness");
+        assertEquals(0, r.exit(), r.err());
+        assertTrue(r.out().startsWith("Rules in the general-fitness profile (extends hypertrophy):"), r.out());
+        assertTrue(r.out().contains("\nunstable-surface       off      Exercises on an unstable surface"), r.out());
+        assertTrue(r.out().contains("\nfatigue-technique      info     "), r.out());
+        assertTrue(r.out().contains(Mesolint.CAUTION), r.out());
+        Run d = run("rules", "--root", rootArg());
+        assertTrue(d.out().contains("\nunstable-surface       warning  "), d.out());
+    }
+
+    @Test
+    void explainPrintsTheReferencePage() {
+        Run r = run("explain", "short-rest-compound");
+        assertEquals(0, r.exit(), r.err());
+        assertTrue(r.out().startsWith("# short-rest-compound\n"), r.out());
+        assertTrue(r.out().contains("| strength | warning | 2min | 3min |"), r.out());
+        assertTrue(r.out().contains(Mesolint.CAUTION), r.out());
+        Run unknown = run("explain", "short-rest");
+        assertEquals(2, unknown.exit());
+        assertTrue(unknown.err().contains("no rule 'short-rest'; did you mean"), unknown.err());
+    }
+
+    @Test
+    void helpStatesThePrecedenceAndTheCaution() {
+        for (String command : new String[] {"check", "baseline", "rules"}) {
+            Run r = run(command, "--help");
+            String flat = r.out().replaceAll("\\s+", " ");
+            assertTrue(flat.contains("first match wins: command-line options, then the repository configuration"),
+                    command + ": " + r.out());
+            assertTrue(flat.contains("not a medical assessment"), command);
+        }
+        String top = run("--help").out();
+        for (String command : new String[] {"check", "baseline", "rules", "explain"}) {
+            assertTrue(top.contains("  " + command + " "), top);
+        }
+    }
+}

@@ -1,0 +1,37 @@
+package dev.mesolint.core.config;
+
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.programme.Goal;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The repository configuration file ({@value #FILE_NAME}) as read: every path already resolved against the folder
+ * that holds the file.
+ *
+ * @param file       the configuration file, empty when the repository has none
+ * @param profile    the profile for every programme that no folder rule or goal entry covers
+ * @param goals      a profile per programme goal, used instead of the built-in profile named after the goal
+ * @param folders    folder or glob rules, the first match wins
+ * @param catalogues extra catalogue files
+ * @param failOn     the level at which a run fails
+ * @param baseline   the baseline file that {@code check} compares with
+ */
+public record RepositoryConfig(Optional<Path> file, Optional<ProfileRef> profile, Map<Goal, ProfileRef> goals,
+        List<FolderRule> folders, List<Path> catalogues, Optional<Severity> failOn, Optional<Path> baseline) {
+
+    /** The name mesolint looks for in the root folder. Hidden, so folder discovery never takes it for a programme. */
+    public static final String FILE_NAME = ".mesolint.yaml";
+
+    /** No configuration file: every default applies. */
+    public static final RepositoryConfig NONE = new RepositoryConfig(Optional.empty(), Optional.empty(), Map.of(),
+            List.of(), List.of(), Optional.empty(), Optional.empty());
+
+    public RepositoryConfig {
+        goals = Map.copyOf(goals);
+        folders = List.copyOf(folders);
+        catalogues = List.copyOf(catalogues);
+    }
+}

@@ -1,0 +1,124 @@
+package dev.mesolint.core.config;
+
+import dev.mesolint.core.catalogue.Named;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.programme.Goal;
+import dev.mesolint.core.yaml.Pointers;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import tools.jackson.databind.JsonNode;
+
+/** Reads and checks the repository configuration file; every problem is located at the key or value at fault. */
+public final class RepositoryConfigReader {
+    static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline");
+    private static final List<String> FOLDER_KEYS = List.of("match", "profile");
+    private static final String EXAMPLE = "folders: [{match: rehab/, profile: profiles/rehab.yaml}]";
+
+    private RepositoryConfigReader() {
+    }
+
+    /** Reads {@code file}; {@code shown} is how messages name it (relative to the root where possible). */
+    public static RepositoryConfig read(Path file, String shown) throws ConfigProblem {
+        ConfigDocument doc = ConfigDocument.read(file, shown);
+        Path base = file.toAbsolutePath().normalize().getParent();
+        JsonNode root = doc.root();
+        if (!root.isObject()) {
+            throw doc.problemAt("", "the configuration must be a mapping of 'key: value' lines",
+                    "start from: profile: hypertrophy");
+        }
+        doc.onlyKeys(root, "", KEYS, "the repository configuration");
+        Optional<ProfileRef> profile = Optional.empty();
+        if (root.has("profile")) {
+            profile = Optional.of(ref(doc, root.get("profile"), "/profile", base));
+        }
+        Optional<Severity> failOn = Optional.empty();
+        if (root.has("fail-on")) {
+            String text = doc.scalar(root.get("fail-on"), "/fail-on", "fail-on: warning");
+            failOn = Optional.of(Severity.parse(text).filter(s -> s != Severity.OFF).orElseThrow(() -> doc.problemAt(
+                    "/fail-on", "fail-on '" + text + "' is not a level", "one of: error, warning, info")));
+        }
+        Optional<Path> baseline = Optional.empty();
+        if (root.has("baseline")) {
+            baseline = Optional.of(base.resolve(doc.scalar(root.get("baseline"), "/baseline",
+                    "baseline: .mesolint-baseline.json")).normalize());
+        }
+        return new RepositoryConfig(Optional.of(file.toAbsolutePath().normalize()), profile,
+                goals(doc, root.get("goals"), base), folders(doc, root.get("folders"), base),
+                catalogues(doc, root.get("catalogues"), base), failOn, baseline);
+    }
+
+    private static ProfileRef ref(ConfigDocument doc, JsonNode node, String pointer, Path base) throws ConfigProblem {
+        String text = doc.scalar(node, pointer, "profile: strength, or profile: profiles/club.yaml");
+        if (text.isBlank()) {
+            throw doc.problemAt(pointer, "the profile is empty", "name a profile (hypertrophy, strength, "
+                    + "general-fitness) or the path of a team profile file");
+        }
+        return ProfileRef.of(text, base, doc.shown(), doc.valueAt(pointer));
+    }
+
+    private static Map<Goal, ProfileRef> goals(ConfigDocument doc, JsonNode node, Path base) throws ConfigProblem {
+        Map<Goal, ProfileRef> goals = new EnumMap<>(Goal.class);
+        if (node == null) {
+            return goals;
+        }
+        doc.mapping(node, "/goals", "goals", "goals: {strength: profiles/club-strength.yaml}");
+        List<String> names = Arrays.stream(Goal.values()).map(Goal::yamlName).toList();
+        doc.onlyKeys(node, "/goals", names, "goals (one entry per programme goal)");
+        for (Map.Entry<String, JsonNode> e : node.properties()) {
+            String pointer = Pointers.child("/goals", e.getKey());
+            goals.put(Named.byYamlName(Goal.class, e.getKey()).orElseThrow(), ref(doc, e.getValue(), pointer, base));
+        }
+        return goals;
+    }
+
+    private static List<FolderRule> folders(ConfigDocument doc, JsonNode node, Path base) throws ConfigProblem {
+        List<FolderRule> rules = new ArrayList<>();
+        if (node == null) {
+            return rules;
+        }
+        if (!node.isArray()) {
+            throw doc.problemAt("/folders", "folders must be a list", "write " + EXAMPLE);
+        }
+        for (int i = 0; i < node.size(); i++) {
+            String pointer = Pointers.child("/folders", i);
+            JsonNode entry = doc.mapping(node.get(i), pointer, "a folders entry", "{match: rehab/, profile: rehab}");
+            doc.onlyKeys(entry, pointer, FOLDER_KEYS, "a folders entry");
+            for (String key : FOLDER_KEYS) {
+                if (!entry.has(key)) {
+                    throw doc.problemAt(pointer, "the folders entry has no '" + key + "'",
+                            "write {match: rehab/, profile: profiles/rehab.yaml}");
+                }
+            }
+            String match = doc.scalar(entry.get("match"), Pointers.child(pointer, "match"), "match: rehab/");
+            ProfileRef profile = ref(doc, entry.get("profile"), Pointers.child(pointer, "profile"), base);
+            try {
+                rules.add(new FolderRule(match, profile));
+            } catch (IllegalArgumentException e) {
+                throw doc.problemAt(Pointers.child(pointer, "match"), "'" + match + "' is not a valid folder or glob",
+                        "write a folder (rehab/) or a glob (rehab/**/*.yaml)");
+            }
+        }
+        return rules;
+    }
+
+    private static List<Path> catalogues(ConfigDocument doc, JsonNode node, Path base) throws ConfigProblem {
+        List<Path> files = new ArrayList<>();
+        if (node == null) {
+            return files;
+        }
+        if (!node.isArray()) {
+            throw doc.problemAt("/catalogues", "catalogues must be a list of files",
+                    "write catalogues: [catalogue/club-exercises.yaml]");
+        }
+        for (int i = 0; i < node.size(); i++) {
+            String pointer = Pointers.child("/catalogues", i);
+            files.add(base.resolve(doc.scalar(node.get(i), pointer, "catalogue/club-exercises.yaml")).normalize());
+        }
+        return files;
+    }
+}

@@ -1,0 +1,2 @@
+/** The repository configuration file, references to profiles, and located configuration errors. */
+package dev.mesolint.core.config;

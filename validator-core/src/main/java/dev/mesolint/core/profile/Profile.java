@@ -1,0 +1,19 @@
+package dev.mesolint.core.profile;
+
+import dev.mesolint.core.config.ProfileRef;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A profile file as written: its name, the profile it extends and the rules it changes. Resolved against its parent
+ * chain by {@link ProfileSet}.
+ *
+ * @param source where it was read from: {@code built-in} or the file as shown to the user
+ */
+public record Profile(String name, Optional<ProfileRef> parent, String description, Map<String, RuleOverride> rules,
+        String source) {
+
+    public Profile {
+        rules = Map.copyOf(rules);
+    }
+}

@@ -1,0 +1,125 @@
+package dev.mesolint.core.rules;
+
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.AgreementStatus;
+import dev.mesolint.core.model.EffortAgreement;
+import dev.mesolint.core.model.OneRepMaxRelation;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.programme.SetPrescription;
+import dev.mesolint.core.rule.Rule;
+import dev.mesolint.core.rule.RuleContext;
+import dev.mesolint.core.rule.RuleMetadata;
+import dev.mesolint.core.source.Location;
+import dev.mesolint.core.value.RirRange;
+import dev.mesolint.core.value.Rpe;
+import java.util.List;
+
+/**
+ * The efforts a set states agree with each other: the load against the reps and reserve, and RIR against RPE.
+ *
+ * <p>Two severities: a load that cannot be lifted for the prescribed reps is always an {@code error} (the set cannot
+ * be done as written); every other disagreement takes the rule's configured severity ({@code warning} by default).
+ * A profile that sets the rule {@code off} silences both.
+ */
+public final class EffortConflictRule implements Rule {
+    public static final String ID = "effort-conflict";
+
+    private static final RuleMetadata METADATA = new RuleMetadata(ID,
+            "The efforts a set states agree: its load allows the prescribed reps (error if not), and does not leave "
+                    + "far more in reserve than stated; RIR and RPE agree.",
+            Severity.WARNING, RuleMetadata.Category.EFFORT, List.of(),
+            "A set that gives both a load and a reserve says the same thing twice, and the two must fit the "
+                    + "published relation between %1RM and reps to failure (NSCA Table 17.7; Brzycki by default). A "
+                    + "load that allows fewer reps than prescribed cannot be done as written and is always an error, "
+                    + "whatever severity the profile gives the rule (a profile can only turn the rule off). A load "
+                    + "that leaves far more reps in reserve than stated (mislabelled), a load that fits the reps but "
+                    + "not the reserve, and RIR and RPE that disagree are reported at the rule's severity (warning). "
+                    + "Reps at a given %1RM vary between people and exercises, and reserve estimates err by more than "
+                    + "two reps far from failure, so the model's tolerance (effortToleranceReps, 2 reps) is allowed "
+                    + "first.",
+            "Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7; Brzycki 1993; Zourdos et al. 2016, "
+                    + "JSCR 30(1):267-275; Hackett et al. 2017, JSCR 31:2162-2168");
+
+    @Override
+    public RuleMetadata metadata() {
+        return METADATA;
+    }
+
+    @Override
+    public void check(RuleContext context) {
+        OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
+        SetGroups<SetMetrics> groups = new SetGroups<>();
+        for (WeekMetrics week : context.metrics().weeks()) {
+            for (SessionMetrics session : week.sessions()) {
+                for (SetMetrics set : session.sets()) {
+                    if (!set.agreement().isConflict()) {
+                        continue;
+                    }
+                    String key = set.agreement().status() == AgreementStatus.RIR_RPE_DIFFER ? "rpe" : "load";
+                    Location where = context.fieldLocation(set.prescription(), key);
+                    groups.add(week, session, set, where, List.of(set.agreement().status(),
+                            EffortText.prescription(set.prescription())), set);
+                }
+            }
+        }
+        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
+            SetMetrics set = group.first();
+            EffortAgreement agreement = set.agreement();
+            Severity severity = agreement.status() == AgreementStatus.INFEASIBLE ? Severity.ERROR : context.severity();
+            group.report(context, severity, group.label() + ": " + problem(set, relation), fix(set, relation));
+        }
+    }
+
+    private static String problem(SetMetrics set, OneRepMaxRelation relation) {
+        SetPrescription p = set.prescription();
+        EffortAgreement a = set.agreement();
+        String written = EffortText.prescription(p);
+        String allows = a.repsToFailure().isPresent()
+                ? "that load allows about " + Texts.num(a.repsToFailure().getAsDouble()) + " reps to failure ("
+                        + Relations.name(relation) + ")"
+                : "";
+        return switch (a.status()) {
+            case INFEASIBLE -> written + " cannot be done: " + allows + ", fewer than the "
+                    + p.reps().max() + " prescribed";
+            case HARDER_THAN_STATED -> written + " ends nearer failure than written: " + allows + ", so "
+                    + p.reps().max() + " reps leave about "
+                    + Texts.num(Math.max(0, a.repsToFailure().getAsDouble() - p.reps().max())) + " in reserve, not "
+                    + Texts.num(leastStated(p)) + " (tolerance " + Texts.num(a.tolerance()) + " reps)";
+            case MISLABELLED -> written + " is mislabelled: " + allows + ", so the set leaves about "
+                    + Texts.num(a.impliedRir().getAsDouble()) + " reps in reserve, not the "
+                    + Texts.num(a.statedRir().getAsDouble()) + " stated (tolerance " + Texts.num(a.tolerance())
+                    + " reps)";
+            case RIR_RPE_DIFFER -> EffortText.stated(p) + " disagree: RPE " + p.rpe().orElseThrow() + " means "
+                    + Texts.num(p.rpe().orElseThrow().repsInReserve()) + " reps in reserve on the RIR-based scale";
+            case AGREE, NOT_CHECKED -> throw new IllegalStateException("not a conflict: " + a.status());
+        };
+    }
+
+    private static String fix(SetMetrics set, OneRepMaxRelation relation) {
+        SetPrescription p = set.prescription();
+        EffortAgreement a = set.agreement();
+        double reserve = p.rir().isPresent() || p.rpe().isPresent() ? leastStated(p) : 0;
+        return switch (a.status()) {
+            case INFEASIBLE, HARDER_THAN_STATED -> {
+                int reps = (int) Math.max(1, Math.floor(a.repsToFailure().getAsDouble() - reserve));
+                String target = p.reps().max() + " reps"
+                        + (reserve > 0 ? " at " + Texts.num(reserve) + " in reserve" : "");
+                yield "load: " + Relations.loadFor(relation, p.reps().max() + reserve) + " for " + target
+                        + ", or reps: " + reps + " at this load";
+            }
+            case MISLABELLED -> "load: " + Relations.loadFor(relation, set.reps() + a.statedRir().getAsDouble())
+                    + " to leave " + Texts.num(a.statedRir().getAsDouble()) + " in reserve, or rir: "
+                    + Math.round(a.impliedRir().getAsDouble()) + " if the lighter load is meant";
+            case RIR_RPE_DIFFER -> "state one of them: keep rir: " + p.rir().orElseThrow()
+                    + " and remove rpe, or write rpe: " + Texts.num(10 - p.rir().orElseThrow().midpoint());
+            case AGREE, NOT_CHECKED -> throw new IllegalStateException("not a conflict: " + a.status());
+        };
+    }
+
+    /** The least reserve the set states: its RIR's lower end, else its RPE read as RIR. */
+    private static double leastStated(SetPrescription p) {
+        return p.rir().map(RirRange::min).orElseGet(() -> p.rpe().map(Rpe::repsInReserve).orElse(0.0));
+    }
+}

@@ -1,0 +1,78 @@
+package dev.mesolint.core.rules;
+
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.EffortSource;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Rule;
+import dev.mesolint.core.rule.RuleContext;
+import dev.mesolint.core.rule.RuleMetadata;
+import dev.mesolint.core.rule.RuleParameter;
+import java.util.List;
+
+/** Working sets stopped so far from failure that they give next to no growth stimulus. */
+public final class FarFromFailureRule implements Rule {
+    public static final String ID = "far-from-failure";
+    static final String MIN_RIR = "min-rir";
+
+    private static final RuleMetadata METADATA = new RuleMetadata(ID,
+            "Working sets that stop 5 or more reps short of failure give next to no stimulus.", Severity.WARNING,
+            RuleMetadata.Category.EFFORT,
+            List.of(RuleParameter.number(MIN_RIR, 5, 3, 10,
+                    "reps in reserve from which a working set is reported (the model's reserve: a range counts at "
+                            + "its midpoint, a load alone gives reps to failure minus reps)")),
+            "Growth comes mostly from the last reps before failure, when every motor unit is working and the bar "
+                    + "slows. Meta-analyses of proximity to failure find that sets ending within a few reps of "
+                    + "failure give clearly more growth than sets ending far from it, and the model gives a set five "
+                    + "or more reps short no stimulating reps at all. Such sets still cost time and some fatigue. "
+                    + "Deload weeks are not checked: easy sets are their point. Reserve estimates err by more than "
+                    + "two reps far from failure, so a set written this far out may be easier still.",
+            "Refalo et al. 2023, Sports Med 53(3):649-665; Robinson et al. 2024, Sports Med 54:2209-2231; Hackett et "
+                    + "al. 2017, JSCR 31:2162-2168");
+
+    @Override
+    public RuleMetadata metadata() {
+        return METADATA;
+    }
+
+    @Override
+    public void check(RuleContext context) {
+        double minRir = context.param(MIN_RIR);
+        SetGroups<SetMetrics> groups = new SetGroups<>();
+        for (WeekMetrics week : context.metrics().weeks()) {
+            if (week.deload()) {
+                continue;
+            }
+            for (SessionMetrics session : week.sessions()) {
+                for (SetMetrics set : session.sets()) {
+                    if (set.effortKnown() && set.rir().getAsDouble() >= minRir) {
+                        groups.add(week, session, set, EffortText.effortLocation(context, set),
+                                EffortText.prescription(set.prescription()), set);
+                    }
+                }
+            }
+        }
+        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
+            SetMetrics set = group.first();
+            String written = EffortText.prescription(set.prescription());
+            String rir = Texts.num(set.rir().getAsDouble());
+            String measured = set.effortSource() == EffortSource.LOAD
+                    ? written + " leaves about " + rir + " reps in reserve"
+                    : written + " stops " + rir + " reps short of failure";
+            group.report(context, context.severity(), group.label() + ": " + measured + "; the "
+                    + context.profileName() + " profile counts sets " + context.shown(MIN_RIR)
+                    + " or more reps short as giving next to no stimulus", fix(context, set));
+        }
+    }
+
+    private static String fix(RuleContext context, SetMetrics set) {
+        return switch (set.effortSource()) {
+            case LOAD -> "a heavier load, e.g. load: "
+                    + Relations.loadFor(context.metrics().parameters().oneRepMaxRelation(), set.reps() + 2) + " for "
+                    + Texts.num(set.reps()) + " reps at about 2 in reserve";
+            case RPE -> "rpe: 8 with a load that leaves about two reps in reserve, or write them as warm-up sets";
+            default -> "rir: 2 with a load that leaves about two reps in reserve, or write them as warm-up sets";
+        };
+    }
+}

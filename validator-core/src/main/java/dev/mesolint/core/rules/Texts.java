@@ -1,0 +1,88 @@
+package dev.mesolint.core.rules;
+
+import dev.mesolint.core.catalogue.Muscle;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.List;
+import java.util.TreeSet;
+
+/** Number and list wording shared by the model rules' messages. */
+final class Texts {
+    private Texts() {
+    }
+
+    /** One decimal, without a trailing {@code .0}: {@code 6.4}, {@code 12}. */
+    static String num(double value) {
+        double rounded = Math.round(value * 10) / 10.0;
+        return rounded == Math.rint(rounded) ? Long.toString((long) rounded) : Double.toString(rounded);
+    }
+
+    /** A share as a percentage with at most one decimal: {@code 80%}, {@code 87.5%}. */
+    static String percent(double fraction) {
+        return num(fraction * 100) + "%";
+    }
+
+    /** A share rounded down to the 2.5 % steps loads are written in. */
+    static String loadStepDown(double fraction) {
+        return num(Math.floor(fraction * 1000 / 25) * 2.5) + "%";
+    }
+
+    /** {@code a 7-rep effort}, {@code an 11-rep effort}: the article for a number read aloud. */
+    static String article(String number) {
+        boolean vowel = number.startsWith("8") || number.matches("1[18](\\.\\d+)?");
+        return vowel ? "an" : "a";
+    }
+
+    /** {@code a 7-rep effort}, {@code an 11-rep effort}: reps to failure of a set, reps plus reserve. */
+    static String effort(double repsToFailure) {
+        String n = num(repsToFailure);
+        return article(n) + " " + n + "-rep effort";
+    }
+
+    static String muscle(Muscle muscle) {
+        return muscle.yamlName();
+    }
+
+    /** {@code set 2}, {@code sets 1-3}, {@code sets 1, 3-4}. */
+    static String sets(Collection<Integer> numbers) {
+        TreeSet<Integer> sorted = new TreeSet<>(numbers);
+        return (sorted.size() == 1 ? "set " : "sets ") + ranges(sorted);
+    }
+
+    /** {@code week 2}, {@code weeks 1-4}. */
+    static String weeks(Collection<Integer> numbers) {
+        TreeSet<Integer> sorted = new TreeSet<>(numbers);
+        return (sorted.size() == 1 ? "week " : "weeks ") + ranges(sorted);
+    }
+
+    /** Consecutive runs joined with a hyphen: {@code 1-3, 5}. */
+    static String ranges(TreeSet<Integer> sorted) {
+        List<String> parts = new ArrayList<>();
+        Integer start = null;
+        Integer previous = null;
+        for (int n : sorted) {
+            if (previous != null && n == previous + 1) {
+                previous = n;
+                continue;
+            }
+            if (start != null) {
+                parts.add(run(start, previous));
+            }
+            start = n;
+            previous = n;
+        }
+        if (start != null) {
+            parts.add(run(start, previous));
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String run(int from, int to) {
+        return from == to ? Integer.toString(from) : from + "-" + to;
+    }
+
+    /** {@code 1 set}, {@code 2.5 sets}. */
+    static String sets(double count) {
+        return num(count) + (count == 1 ? " hard set" : " hard sets");
+    }
+}

@@ -1,0 +1,83 @@
+package dev.mesolint.core.rules;
+
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Rule;
+import dev.mesolint.core.rule.RuleContext;
+import dev.mesolint.core.rule.RuleMetadata;
+import dev.mesolint.core.rule.RuleParameter;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/** A muscle the programme trains directly gets too few hard sets in a week to be worth its time. */
+public final class WeeklyVolumeMinRule implements Rule {
+    public static final String ID = "weekly-volume-min";
+    static final String MIN_SETS = "min-sets";
+
+    private static final RuleMetadata METADATA = new RuleMetadata(ID,
+            "A muscle the programme trains directly (a prime mover of one of its exercises) gets at least 4 credited "
+                    + "hard sets a week; deload weeks are skipped.",
+            Severity.INFO, RuleMetadata.Category.VOLUME,
+            List.of(RuleParameter.number(MIN_SETS, 4, 1, 20,
+                    "fewest credited hard sets a week for a muscle the programme trains directly")),
+            "Weekly sets per muscle drive growth, and the dose-response meta-analyses find small effects at the "
+                    + "lowest volumes. When a programme gives a muscle an exercise of its own but fewer than about "
+                    + "four hard sets in the week, the exercise costs a place in the session for little return: add "
+                    + "sets, or drop the direct work and let the compound lifts cover the muscle. Muscles only ever "
+                    + "trained as synergists are not checked (the programme does not aim at them), nor are deload "
+                    + "weeks. The threshold is common practice drawn from that literature.",
+            "Schoenfeld, Ogborn & Krieger 2017, J Sports Sci 35(11):1073-1082; Pelland et al. 2024; ACSM 2009 "
+                    + "position stand (Ratamess et al., MSSE 41(3):687-708); the 4-set threshold is common practice "
+                    + "drawn from that dose-response literature");
+
+    @Override
+    public RuleMetadata metadata() {
+        return METADATA;
+    }
+
+    @Override
+    public void check(RuleContext context) {
+        double min = context.param(MIN_SETS);
+        Map<Muscle, String> direct = directlyTrained(context);
+        for (WeekMetrics week : context.metrics().weeks()) {
+            if (week.deload()) {
+                continue;
+            }
+            direct.forEach((muscle, exercise) -> {
+                double sets = week.hardSets(muscle);
+                if (sets >= min) {
+                    return;
+                }
+                double missing = Math.ceil(min - sets);
+                Places.reportWeek(context, week, Texts.muscle(muscle) + ", week " + week.number() + ": "
+                        + Texts.sets(sets) + ", under the " + context.shown(MIN_SETS) + " a week the "
+                        + context.profileName() + " profile asks for a muscle the programme trains directly ("
+                        + exercise + ")",
+                        "add " + Texts.num(missing) + " hard " + (missing == 1 ? "set" : "sets") + " for the "
+                                + Texts.muscle(muscle) + " (e.g. on " + exercise + "), or drop the direct work");
+            });
+        }
+    }
+
+    /** Each muscle that is a prime mover (credit 1) of an exercise the programme does, with the first such exercise. */
+    private static Map<Muscle, String> directlyTrained(RuleContext context) {
+        Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
+        for (WeekMetrics week : context.metrics().weeks()) {
+            for (SessionMetrics session : week.sessions()) {
+                for (SetMetrics set : session.sets()) {
+                    context.exercise(set.exerciseId()).ifPresent(e -> e.muscles().forEach((muscle, credit) -> {
+                        if (credit >= Exercise.PRIME_MOVER) {
+                            direct.putIfAbsent(muscle, e.id());
+                        }
+                    }));
+                }
+            }
+        }
+        return direct;
+    }
+}

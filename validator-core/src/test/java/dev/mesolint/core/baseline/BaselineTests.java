@@ -1,0 +1,190 @@
+package dev.mesolint.core.baseline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.ProfileConfiguration;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.report.ConsoleReport;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rules.BuiltInRules;
+import dev.mesolint.core.testing.TempFiles;
+import dev.mesolint.core.yaml.YamlLimits;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class BaselineTests {
+    private final List<RuleDefinition> rules = BuiltInRules.all();
+
+    @TempDir
+    Path root;
+
+    private static final String PROGRAMME = """
+            format: 1
+            programme:
+              id: harbour-baseline
+              level: intermediate
+              goal: hypertrophy
+            weeks:
+              - week: 1
+                sessions:
+                  - day: 1
+                    work:
+                      - exercise: barbell-back-squat
+                        sets: 3
+                        reps: 8
+                        rir: 2
+                        rest: 75s
+                      - exercise: dumbbell-curl
+                        sets: 3
+                        reps: 12
+                        rir: 1
+                        rest: 30s
+                      - exercise: cable-crunch
+                        sets: 2
+                        reps: 12
+                        rir: 2
+                        rest: 60s
+            """;
+
+    private RunReport check(Path file) {
+        return new Checker(new CheckRequest(List.of(file), root, Severity.WARNING, List.of(),
+                ProfileConfiguration.builtIn(rules), YamlLimits.DEFAULTS), rules).run();
+    }
+
+    private Baseline roundTrip(RunReport run) throws IOException, ConfigProblem {
+        Path file = root.resolve(".mesolint-baseline.json");
+        Baseline.of(run).write(file);
+        return Baseline.read(file, ".mesolint-baseline.json");
+    }
+
+    @Test
+    void aBaselinedRunCountsNothingAndStillShowsTheFindings() throws IOException, ConfigProblem {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        RunReport before = check(file);
+        assertEquals(2, before.active().size());
+        assertTrue(before.failed());
+
+        Baseline baseline = roundTrip(before);
+        assertEquals(2, baseline.size());
+        RunReport after = baseline.apply(check(file));
+        assertEquals(List.of(), after.active());
+        assertFalse(after.failed());
+        assertEquals(2, after.baselinedCount());
+
+        StringWriter text = new StringWriter();
+        new ConsoleReport(false).write(after, new PrintWriter(text));
+        assertTrue(text.toString().contains("block.yaml:15:19: baselined warning short-rest-compound: "), text.toString());
+        assertTrue(text.toString().contains("0 waived, 2 baselined"), text.toString());
+        assertFalse(text.toString().contains("FAILED"), text.toString());
+    }
+
+    @Test
+    void findingsStayMatchedWhenLinesAreInsertedAboveThem() throws IOException, ConfigProblem {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        Baseline baseline = roundTrip(check(file));
+        String moved = "# Harbourside Strength Club, spring block.\n# Reviewed by the coaching team.\n" + PROGRAMME
+                .replace("  goal: hypertrophy\n", "  goal: hypertrophy\n  title: Spring block\n")
+                .replace("            sets: 3\n            reps: 8\n", "            note: Film the second set.\n"
+                        + "            sets: 3\n            reps: 8\n");
+        Files.writeString(file, moved);
+        RunReport after = check(file);
+        List<Finding> findings = after.files().get(0).findings();
+        assertEquals(List.of(19, 24), findings.stream().map(f -> f.location().line()).toList(),
+                "both rests moved down");
+        RunReport applied = baseline.apply(after);
+        assertEquals(List.of(), applied.active());
+        assertEquals(2, applied.baselinedCount());
+    }
+
+    @Test
+    void aFindingWhoseYamlPathChangesIsNew() throws IOException, ConfigProblem {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        Baseline baseline = roundTrip(check(file));
+        // An exercise inserted before the curls moves them from work[1] to work[2], and the squat's last rest now
+        // leads to the new exercise: both messages or paths change, so both findings are new.
+        String entry = "          - exercise: machine-leg-extension\n            sets: 2\n            reps: 12\n"
+                + "            rir: 2\n            rest: 90s\n";
+        Files.writeString(file, PROGRAMME.replace("          - exercise: dumbbell-curl\n",
+                entry + "          - exercise: dumbbell-curl\n"));
+        RunReport applied = baseline.apply(check(file));
+        assertEquals(List.of("short-rest-compound", "short-rest-isolation"),
+                applied.active().stream().map(Finding::ruleId).toList());
+    }
+
+    @Test
+    void aNewFindingIsNotMatchedAndFailsTheRun() throws IOException, ConfigProblem {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        Baseline baseline = roundTrip(check(file));
+        Files.writeString(file, PROGRAMME.replace("rest: 60s", "rest: 60s\n            tempo: 3-0-5-0"));
+        RunReport applied = baseline.apply(check(file));
+        assertEquals(List.of("slow-concentric"), applied.active().stream().map(Finding::ruleId).toList());
+        assertEquals(2, applied.baselinedCount());
+        assertFalse(applied.failed(), "slow-concentric is info, the fail level warning");
+        Files.writeString(file, PROGRAMME.replace("rest: 75s", "rest: 60s"));
+        RunReport changed = baseline.apply(check(file));
+        assertTrue(changed.failed(), "a changed rest changes the message: the finding is new");
+    }
+
+    @Test
+    void eachEntryMatchesAsManyFindingsAsItsCount() throws IOException, ConfigProblem {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        RunReport run = check(file);
+        Finding squat = run.active().get(0);
+        RunReport doubled = new RunReport(List.of(new dev.mesolint.core.engine.FileReport("block.yaml",
+                run.files().get(0).programme(), "hypertrophy", List.of(squat, squat))), Severity.WARNING, List.of());
+        Baseline two = roundTrip(doubled);
+        assertEquals(1, two.entries().size());
+        assertEquals(2, two.entries().get(0).count());
+        RunReport three = new RunReport(List.of(new dev.mesolint.core.engine.FileReport("block.yaml",
+                run.files().get(0).programme(), "hypertrophy", List.of(squat, squat, squat))), Severity.WARNING,
+                List.of());
+        assertEquals(1, two.apply(three).active().size());
+    }
+
+    @Test
+    void theFileIsSortedJsonWithoutLineNumbers() throws IOException {
+        Path file = TempFiles.write(root, "block.yaml", PROGRAMME);
+        Path out = root.resolve("b.json");
+        Baseline.of(check(file)).write(out);
+        String json = Files.readString(out);
+        assertTrue(json.contains("\"path\" : \"/weeks/0/sessions/0/work/0/rest\""), json);
+        assertFalse(json.contains("\"line\""), json);
+        assertTrue(json.indexOf("work/0/rest") < json.indexOf("work/1/rest"), json);
+    }
+
+    @Test
+    void aBrokenBaselineIsALocatedError() {
+        Path file = TempFiles.write(root, "b.json", """
+                {
+                  "format": 1,
+                  "findings": [
+                    {"rule": "short-rest-compound", "file": "a.yaml", "path": "/x", "message": "m"},
+                    {"rule": "short-rest-compound", "file": "a.yaml", "path": "/y", "mesage": "m"}
+                  ]
+                }
+                """);
+        ConfigProblem p = assertThrows(ConfigProblem.class, () -> Baseline.read(file, "b.json"));
+        assertEquals("b.json:5:69: unknown key 'mesage' in a baseline entry", p.describe().substring(0,
+                p.describe().indexOf(" (fix")));
+        Path syntax = TempFiles.write(root, "c.json", "{\"format\": 1,\n \"findings\": [\n");
+        ConfigProblem s = assertThrows(ConfigProblem.class, () -> Baseline.read(syntax, "c.json"));
+        assertTrue(s.describe().startsWith("c.json:"), s.describe());
+        ConfigProblem missing = assertThrows(ConfigProblem.class, () -> Baseline.read(root.resolve("none.json"),
+                "none.json"));
+        assertTrue(missing.describe().startsWith("none.json: no baseline file"), missing.describe());
+    }
+}

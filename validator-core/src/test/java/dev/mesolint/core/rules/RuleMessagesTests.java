@@ -1,0 +1,140 @@
+package dev.mesolint.core.rules;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.reference.RuleExample;
+import dev.mesolint.core.testing.FixtureHarness;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+
+/**
+ * The wording of each new rule's finding: what was measured, the limit, where (exercise, week, day, set) and a
+ * concrete fix. Where the fixtures only fix the lines, these fix the words.
+ */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class RuleMessagesTests {
+    private Map<Path, FileReport> reports;
+
+    @BeforeAll
+    void check() throws IOException {
+        List<RuleExample> examples = new ArrayList<>();
+        for (String f : List.of("short-rest-compound/failing.yaml", "short-rest-compound/failing-strength.yaml",
+                "short-rest-compound/failing-superset.yaml", "short-rest-compound/failing-deload-week.yaml",
+                "short-rest-isolation/failing.yaml",
+                "fatigue-technique/failing.yaml", "fatigue-technique/failing-general-fitness.yaml",
+                "unstable-surface/failing.yaml", "slow-concentric/failing.yaml", "constraint-avoid/failing.yaml",
+                "no-deload/failing.yaml")) {
+            examples.add(RuleExample.read(FixtureHarness.FIXTURES.resolve(f)));
+        }
+        reports = FixtureHarness.check(examples, BuiltInRules.all());
+    }
+
+    private List<Finding> found(String fixture) {
+        return reports.get(FixtureHarness.FIXTURES.resolve(fixture)).active();
+    }
+
+    private static String text(Finding f) {
+        return f.severity().label() + " " + f.message() + " (fix: " + f.fix() + ")";
+    }
+
+    @Test
+    void shortRestCompound() {
+        // ACSM 2009 position stand (Ratamess et al., MSSE 41(3):687-708): >= 2-3 min for heavy core lifts
+        assertEquals("warning barbell-back-squat, week 1 day 1 (Lower), sets 1 -> 2, 2 -> 3, 3 -> "
+                + "machine-leg-extension: rest 75 s, the hypertrophy profile asks for at least 120 s after compound "
+                + "sets (fix: rest: 2min)", text(found("short-rest-compound/failing.yaml").get(0)));
+        // Schoenfeld et al. 2016 JSCR 30(7):1805-1812: 3 min beat 1 min for strength and thigh thickness
+        assertEquals("warning barbell-romanian-deadlift, week 1 day 1, sets 1 -> 2, 2 -> 3, 3 -> "
+                + "barbell-bent-over-row: rest 150 s, the strength profile asks for at least 180 s after squat and "
+                + "hinge sets (fix: rest: 3min)", text(found("short-rest-compound/failing-strength.yaml").get(0)));
+        List<Finding> superset = found("short-rest-compound/failing-superset.yaml");
+        assertEquals(List.of("warning chest-supported-dumbbell-row, week 1 day 1, rounds 1 -> 2, 2 -> 3: rest 90 s (60 s "
+                + "after the round + 30 s of changeovers), the hypertrophy profile asks for at least 120 s after "
+                + "compound sets (fix: rest: 2min on the superset, the rest after each round)",
+                "warning dumbbell-bench-press, week 1 day 1, rounds 1 -> 2, 2 -> 3: rest 90 s (60 s after the "
+                        + "round + 30 s of changeovers), the hypertrophy profile asks for at least 120 s after "
+                        + "compound sets (fix: rest: 2min on the superset, the rest after each round)"),
+                superset.stream().map(RuleMessagesTests::text).sorted().toList());
+    }
+
+    @Test
+    void weeksWithDifferentSetsAreReportedApart() {
+        assertEquals(List.of("barbell-bench-press, week 1 day 1, sets 1 -> 2, 2 -> 3, 3 -> cable-triceps-pushdown: "
+                + "rest 90 s, the hypertrophy profile asks for at least 120 s after compound sets",
+                "barbell-bench-press, week 2 day 1, sets 1 -> 2, 2 -> cable-triceps-pushdown: rest 90 s, the "
+                        + "hypertrophy profile asks for at least 120 s after compound sets"),
+                found("short-rest-compound/failing-deload-week.yaml").stream().map(Finding::message).toList());
+    }
+
+    @Test
+    void shortRestIsolation() {
+        // Singer et al. 2024 Front Sports Act Living 6:1429789: small benefit above 60 s
+        assertEquals("info dumbbell-curl, week 1 day 1, sets 1 -> 2, 2 -> 3, 3 -> dumbbell-lateral-raise: rest 30 s, "
+                + "the hypertrophy profile asks for at least 60 s after isolation sets (fix: rest: 1min)",
+                text(found("short-rest-isolation/failing.yaml").get(0)));
+    }
+
+    @Test
+    void fatigueTechnique() {
+        List<Finding> f = found("fatigue-technique/failing.yaml");
+        assertEquals(3, f.size());
+        assertEquals("warning barbell-bench-press, week 1 day 1, set 3: rest-pause: mini-sets after short pauses at "
+                + "failure add fatigue for little extra stimulus; the hypertrophy profile reports fatigue techniques "
+                + "(fix: remove technique: rest-pause; if more volume is wanted, add one straight set at the same "
+                + "effort)", text(f.get(0)));
+        assertEquals("warning machine-chest-press, week 1 day 1: done right after dumbbell-chest-fly in a superset, "
+                + "and both have chest as prime mover: each set starts with that muscle already tired, adding "
+                + "fatigue for less stimulus; the hypertrophy profile reports such pairs (fix: pair exercises for "
+                + "different muscles (e.g. a push with a pull), or do them as straight sets with rest)",
+                text(f.get(1)));
+        assertEquals("warning cable-chest-fly, week 1 day 1, set 3: drop set: more reps past failure at a lighter "
+                + "load add fatigue for little extra stimulus; the hypertrophy profile reports fatigue techniques "
+                + "(fix: remove technique: drop-set; if more volume is wanted, add one straight set at the same "
+                + "effort)", text(f.get(2)));
+        assertEquals(Severity.INFO, found("fatigue-technique/failing-general-fitness.yaml").get(0).severity());
+    }
+
+    @Test
+    void unstableSurface() {
+        // Behm, Drinkwater, Willardson & Cowley 2010, CSEP position stand, Appl Physiol Nutr Metab 35(1):109-112
+        assertEquals("warning stability-ball-dumbbell-press, weeks 1-2 day 1: done on an unstable surface "
+                + "(catalogue stability: unstable): balance demand caps how hard chest can be driven, so the "
+                + "hypertrophy profile reports it as low-yield for hypertrophy and strength (fix: use a stable "
+                + "version such as dumbbell-bench-press, or waive this rule with the reason if balance work is the "
+                + "aim)", text(found("unstable-surface/failing.yaml").get(0)));
+    }
+
+    @Test
+    void slowConcentric() {
+        assertEquals("info barbell-bench-press, week 1 day 1, sets 1-3: tempo 3-0-5-0 lifts in 5 s, at or over the "
+                + "4 s the hypertrophy profile reports: a slow lift lowers the load and the effort per rep, it does "
+                + "not add stimulus (fix: tempo: 3-0-1-0 (lift with control, as fast as the load allows))",
+                text(found("slow-concentric/failing.yaml").get(0)));
+    }
+
+    @Test
+    void constraintAvoidNamesTheReasonAndDefersToTheClinician() {
+        assertEquals("error barbell-upright-row, weeks 1-2 day 1: the athlete's constraint athlete.constraints[0] "
+                + "excludes this exercise (reason given: Pinching at the front of the shoulder in that position; "
+                + "physiotherapist's advice.) (fix: remove it or swap it for an exercise the athlete's clinician "
+                + "has cleared; their advice comes before any general guidance)",
+                text(found("constraint-avoid/failing.yaml").get(0)));
+    }
+
+    @Test
+    void noDeload() {
+        assertEquals("info weeks 1-8: 8 weeks in a row without a deload week, more than the 6 the hypertrophy "
+                + "profile allows for an intermediate lifter (fix: make week 7 (or an earlier one) a deload: "
+                + "deload: true, with fewer sets or more reps in reserve)", text(found("no-deload/failing.yaml")
+                        .get(0)));
+    }
+}
