@@ -8,7 +8,10 @@ import dev.mesolint.core.report.ConsoleReport;
 import java.util.function.Consumer;
 import org.apache.maven.plugin.logging.Log;
 
-/** Logs findings in the console form ({@code file:line:column: severity rule-id: message}), at their severity. */
+/**
+ * Logs findings in the console form ({@code file:line:column: severity rule-id: message}), at their severity; waived
+ * and baselined findings, which never fail the build, at info.
+ */
 final class FindingLog {
     private final Log log;
     private final boolean showWaived;
@@ -37,7 +40,7 @@ final class FindingLog {
     }
 
     private Consumer<CharSequence> level(Finding f) {
-        if (f.waived()) {
+        if (f.waived() || f.baselined()) {
             return log::info;
         }
         return switch (f.severity()) {

@@ -52,6 +52,34 @@ class CheckMojoTests {
     }
 
     @Test
+    void parametersOverrideTheConfigurationFileWhichOverridesTheDefaults() throws Exception {
+        // Three sets of bench press a week: an info finding (weekly-volume-min) under the hypertrophy profile.
+        MojoFixture repo = new MojoFixture(dir).programme("light.yaml", MojoFixture.PROGRAMME.replace("sets: 4",
+                "sets: 3"));
+        Files.writeString(dir.resolve(".mesolint.yaml"), "fail-on: info\n");
+
+        MojoFailureException failure = assertThrows(MojoFailureException.class, () -> repo.check().execute());
+        assertTrue(failure.getMessage().contains("at or above the fail level 'info'"), failure.getMessage());
+        assertTrue(repo.log.lines.contains("[DEBUG] mesolint: failOn = info (.mesolint.yaml)"), repo.log.text());
+
+        CheckMojo overridden = repo.check();
+        overridden.failOn = "error";
+        overridden.execute();
+        assertTrue(repo.log.lines.contains("[DEBUG] mesolint: failOn = error (plugin parameter failOn)"));
+        assertTrue(repo.log.lines.contains("[DEBUG] mesolint: config = .mesolint.yaml (found in " + dir + ")"),
+                repo.log.text());
+    }
+
+    @Test
+    void aBrokenConfigurationFileIsAnExecutionErrorLocatedAtTheKey() throws IOException {
+        MojoFixture repo = repository();
+        Files.writeString(dir.resolve(".mesolint.yaml"), "fail-on: fatal\n");
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, () -> repo.check().execute());
+        assertTrue(error.getMessage().startsWith("mesolint: .mesolint.yaml:1:10: fail-on 'fatal' is not a level"),
+                error.getMessage());
+    }
+
+    @Test
     void aBadParameterValueIsAnExecutionErrorNamingTheParameter() throws IOException {
         MojoFixture repo = repository();
         CheckMojo mojo = repo.check();

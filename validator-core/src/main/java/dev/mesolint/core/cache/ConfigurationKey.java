@@ -31,12 +31,13 @@ public final class ConfigurationKey {
      * snapshot does not reuse what an older build of the same version found.
      */
     public static ConfigurationKey forThisVersion() {
-        return new ConfigurationKey(Mesolint.version() + " " + codeStamp());
+        return new ConfigurationKey(Mesolint.version() + " " + codeStamp(Mesolint.class));
     }
 
-    private static String codeStamp() {
+    /** Size and time of the jar a class was loaded from ("classes" for a folder), so rebuilt jars change keys. */
+    private static String codeStamp(Class<?> type) {
         try {
-            Path code = Path.of(Mesolint.class.getProtectionDomain().getCodeSource().getLocation().toURI());
+            Path code = Path.of(type.getProtectionDomain().getCodeSource().getLocation().toURI());
             return Files.isRegularFile(code) ? Files.size(code) + "@" + Files.getLastModifiedTime(code).toMillis()
                     : "classes";
         } catch (IOException | URISyntaxException | RuntimeException e) {
@@ -53,6 +54,9 @@ public final class ConfigurationKey {
             throws IOException {
         ConfigurationKey key = forThisVersion()
                 .option("rules", rules.stream().map(RuleDefinition::id).collect(Collectors.joining(",")))
+                // Team rule packs are jars of their own: a rebuilt pack must not reuse the old pack's findings.
+                .option("rule code", rules.stream().map(r -> codeStamp(r.getClass())).distinct().sorted()
+                        .collect(Collectors.joining(",")))
                 .option("root", request.root())
                 .option("failOn", request.failOn().label())
                 .option("profile", workspace.options().profile().orElse(null))
