@@ -20,8 +20,8 @@ public final class FarFromFailureRule implements Rule {
             "Working sets that stop 5 or more reps short of failure give next to no stimulus.", Severity.WARNING,
             RuleMetadata.Category.EFFORT,
             List.of(RuleParameter.number(MIN_RIR, 5, 3, 10,
-                    "reps in reserve from which a working set is reported (the model's reserve: a range counts at "
-                            + "its midpoint, a load alone gives reps to failure minus reps)")),
+                    "Reps in reserve from which a working set is reported (the model's reserve: a range counts "
+                            + "at its midpoint, a load alone gives reps to failure minus reps).")),
             "Growth comes mostly from the last reps before failure, when every motor unit is working and the bar "
                     + "slows. Meta-analyses of proximity to failure find that sets ending within a few reps of "
                     + "failure give clearly more growth than sets ending far from it, and the model gives a set five "

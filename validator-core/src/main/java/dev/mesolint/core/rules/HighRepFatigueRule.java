@@ -27,9 +27,9 @@ public final class HighRepFatigueRule implements Rule {
                     + "isolation lifts.",
             Severity.WARNING, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.integer(MIN_EFFORT_REPS, 15, 8, 40,
-                            "reps plus reps in reserve (the set's reps to failure) from which a set is long"),
+                            "Reps plus reps in reserve (the set's reps to failure) from which a set is long."),
                     RuleParameter.number(MAX_RIR, 2, 0, 5,
-                            "most reps in reserve at which a long set counts as taken close to failure")),
+                            "Most reps in reserve at which a long set counts as taken close to failure.")),
             "Past about fifteen reps, a set close to failure piles up fatigue (breathing, metabolites, "
                     + "concentration) faster than it adds growth stimulus: only the last few reps before failure "
                     + "stimulate much, whatever the set's length, while the fatigue keeps rising with every rep and "

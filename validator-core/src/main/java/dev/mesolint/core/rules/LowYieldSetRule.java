@@ -28,7 +28,7 @@ public final class LowYieldSetRule implements Rule {
                     + "(earlier sets, short rest).",
             Severity.INFO, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.percent(MIN_SHARE, 0.30, 0.05, 0.9,
-                    "share of its fresh stimulus below which a set is reported")),
+                    "Share of its fresh stimulus below which a set is reported.")),
             "Fatigue from the sets before lowers how much of a muscle a set can still reach, so each further set of "
                     + "the same muscle in a session adds less, the more so the shorter the rests. The model follows "
                     + "the muscle's residual fatigue set by set; a set that keeps under 30% of the stimulus it would "

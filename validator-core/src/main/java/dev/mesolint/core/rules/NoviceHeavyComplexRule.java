@@ -24,8 +24,8 @@ public final class NoviceHeavyComplexRule implements Rule {
                     + "85% of 1RM and up).",
             Severity.WARNING, RuleMetadata.Category.SAFETY,
             List.of(RuleParameter.integer(MAX_EFFORT_REPS, 6, 1, 15,
-                    "reps plus reps in reserve (the set's reps to failure) at or below which a set of a high-skill "
-                            + "lift is heavy; 6 is about 85% of 1RM in NSCA Table 17.7")),
+                    "Reps plus reps in reserve (the set's reps to failure) at or below which a set of a high-skill "
+                            + "lift is heavy; 6 is about 85% of 1RM in NSCA Table 17.7.")),
             "High-skill lifts (the Olympic lifts and their variations, back and front squats, deadlifts, overhead "
                     + "squats) need many practice reps before heavy loads are safe and useful: under a load a lifter "
                     + "can move only about six times, a technique that is not yet automatic breaks down first. The "

@@ -25,9 +25,9 @@ public final class RecoveryGapRule implements Rule {
             "A muscle trained with 4 or more hard sets in two sessions is given at least 48 h between them.",
             Severity.WARNING, RuleMetadata.Category.RECOVERY,
             List.of(RuleParameter.integer(MIN_HOURS, 48, 12, 168,
-                            "fewest hours between two sessions that both train a muscle hard (24 h per day)"),
+                            "Fewest hours between two sessions that both train a muscle hard (24 h per day)."),
                     RuleParameter.number(MIN_SETS, 4, 1, 20,
-                            "credited hard sets that make a session train a muscle hard for this rule")),
+                            "Credited hard sets that make a session train a muscle hard for this rule.")),
             "A muscle trained hard needs time before it is trained hard again: the position stands ask for at least "
                     + "48 hours between sessions that stress the same muscles, and the NSCA for at least one rest day "
                     + "(but no more than three) between them. Two sessions that each give a muscle four or more hard "

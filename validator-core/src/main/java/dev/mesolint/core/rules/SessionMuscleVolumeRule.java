@@ -21,7 +21,7 @@ public final class SessionMuscleVolumeRule implements Rule {
             "No muscle gets more than 10 credited hard sets in one session.", Severity.WARNING,
             RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_SETS, 10, 4, 30,
-                    "most credited hard sets for one muscle in one session (prime mover 1, synergist 0.5)")),
+                    "Most credited hard sets for one muscle in one session (prime mover 1, synergist 0.5).")),
             "More sets give more growth, but with diminishing returns, and within one session the returns fall "
                     + "fastest: each further set of the same muscle starts more fatigued and adds less. Past about "
                     + "ten hard sets for one muscle in a session, the extra sets mostly add fatigue and time; the "

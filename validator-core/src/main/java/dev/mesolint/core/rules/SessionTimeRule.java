@@ -19,7 +19,7 @@ public final class SessionTimeRule implements Rule {
             "The estimated length of each session stays within the programme's session-minutes.", Severity.WARNING,
             RuleMetadata.Category.TIME,
             List.of(RuleParameter.integer(SESSION_MINUTES, 90, 10, 300,
-                    "the time budget per session when the programme states no session-minutes of its own")),
+                    "The time budget per session when the programme states no session-minutes of its own.")),
             "A session that does not fit the time the lifter has gets cut short on the day, and what is dropped is "
                     + "usually the last exercises, not the least useful ones. The estimate adds up the reps (4 s each "
                     + "without a tempo), the rests, the warm-up sets (1.5 min each) and a minute to set up each "
