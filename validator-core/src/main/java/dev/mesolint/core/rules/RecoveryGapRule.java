@@ -60,7 +60,7 @@ public final class RecoveryGapRule implements Rule {
         }
         // The last session that trained each muscle hard, so far along the timeline.
         Map<Muscle, Visit> last = new EnumMap<>(Muscle.class);
-        WeekMerge merge = new WeekMerge();
+        Occurrences found = new Occurrences();
         for (Visit visit : timeline) {
             for (Muscle muscle : visit.session().muscles().keySet()) {
                 if (visit.session().hardSets(muscle) < minSets) {
@@ -72,14 +72,14 @@ public final class RecoveryGapRule implements Rule {
                 }
                 double hours = (double) (visit.blockDay() - before.blockDay()) * HOURS_PER_DAY;
                 if (hours < minHours) {
-                    add(context, merge, muscle, before, visit, hours);
+                    add(context, found, muscle, before, visit, hours);
                 }
             }
         }
-        merge.report(context);
+        found.report(context);
     }
 
-    private static void add(RuleContext context, WeekMerge merge, Muscle muscle, Visit before, Visit visit,
+    private static void add(RuleContext context, Occurrences found, Muscle muscle, Visit before, Visit visit,
             double hours) {
         String name = Texts.muscle(muscle);
         boolean sameWeek = before.week().number() == visit.week().number();
@@ -90,7 +90,7 @@ public final class RecoveryGapRule implements Rule {
         String move = earliestDay <= DAYS_PER_WEEK
                 ? "move " + Places.day(visit.session()) + " to day " + earliestDay + " or later"
                 : "move " + Places.day(before.session()) + " earlier";
-        Places.addSession(context, merge, visit.week(), visit.session(), name + ", " + Places.session(visit.session())
+        Places.addSession(context, found, visit.week(), visit.session(), name + ", " + Places.session(visit.session())
                 + ": " + Texts.sets(visit.session().hardSets(muscle)) + ", " + Texts.num(hours) + " h after "
                 + earlier + "; the " + context.profileName() + " profile asks for at least "
                 + context.shown(MIN_HOURS) + " h between sessions that each give a muscle " + context.shown(MIN_SETS)

@@ -39,7 +39,7 @@ public final class SessionTimeRule implements Rule {
         String whose = stated.isPresent() ? "the programme's session-minutes: " + Texts.num(budget)
                 : "the " + context.profileName() + " profile's " + context.shown(SESSION_MINUTES) + " minutes (the "
                         + "programme states no session-minutes)";
-        WeekMerge merge = new WeekMerge();
+        Occurrences found = new Occurrences();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 double minutes = session.minutes();
@@ -49,7 +49,7 @@ public final class SessionTimeRule implements Rule {
                 int sets = session.sets().size();
                 double perSet = sets == 0 ? 0 : minutes / sets;
                 long cut = perSet == 0 ? 0 : (long) Math.ceil((minutes - budget) / perSet);
-                Places.addSession(context, merge, week, session, Places.session(session) + ": about "
+                Places.addSession(context, found, week, session, Places.session(session) + ": about "
                         + Math.round(minutes) + " min estimated (" + sets + " working sets with rests, warm-ups and "
                         + "set-ups), over " + whose,
                         (cut > 0 ? "cut about " + cut + " working " + (cut == 1 ? "set" : "sets") + " or shorten "
@@ -57,6 +57,6 @@ public final class SessionTimeRule implements Rule {
                                 + ", or raise session-minutes to " + (long) Math.ceil(minutes));
             }
         }
-        merge.report(context);
+        found.report(context);
     }
 }
