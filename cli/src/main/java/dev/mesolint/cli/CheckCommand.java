@@ -14,7 +14,6 @@ import dev.mesolint.core.report.ModelFigures;
 import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
-import dev.mesolint.core.report.VolumeBounds;
 import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -114,7 +113,7 @@ final class CheckCommand implements Callable<Integer> {
         new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
         ReportInput input = ReportInput.of(report, installed.rules(), workspace.root())
                 .withConfiguration(workspace.configuration())
-                .withFigures(new ModelFigures((profile, muscle) -> VolumeBounds.DEFAULTS))
+                .withFigures(ModelFigures.underProfiles(workspace.configuration(), installed.rules()))
                 .withElapsed(elapsed);
         for (ReportTarget target : reports) {
             try {

@@ -46,6 +46,11 @@ public final class WeeklyVolumeMaxRule implements Rule {
                     + "returns; fractional counting); the 20-set limit is common practice drawn from that "
                     + "dose-response literature");
 
+    /** The weekly cap for {@code muscle} under {@code settings}: the competition lifts' prime movers have their own. */
+    public static double cap(dev.mesolint.core.rule.RuleSettings settings, Muscle muscle) {
+        return settings.value(COMPETITION_PRIME_MOVERS.contains(muscle) ? MAX_SETS_COMPETITION : MAX_SETS);
+    }
+
     @Override
     public RuleMetadata metadata() {
         return METADATA;

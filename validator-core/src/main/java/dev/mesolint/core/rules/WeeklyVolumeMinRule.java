@@ -35,6 +35,11 @@ public final class WeeklyVolumeMinRule implements Rule {
                     + "position stand (Ratamess et al., MSSE 41(3):687-708); the 4-set threshold is common practice "
                     + "drawn from that dose-response literature");
 
+    /** The weekly floor under {@code settings}. */
+    public static double floor(dev.mesolint.core.rule.RuleSettings settings) {
+        return settings.value(MIN_SETS);
+    }
+
     @Override
     public RuleMetadata metadata() {
         return METADATA;
