@@ -1,19 +1,17 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
-import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.FileReport;
-import dev.mesolint.core.engine.RuleConfiguration;
+import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
-import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.FileMetrics;
 import dev.mesolint.core.report.MetricsCsvWriter;
 import dev.mesolint.core.report.MetricsJsonWriter;
 import dev.mesolint.core.report.MetricsTableFormatter;
-import dev.mesolint.core.rules.BuiltInRules;
-import dev.mesolint.core.yaml.YamlLimits;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Writer;
@@ -22,9 +20,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -33,7 +33,7 @@ import picocli.CommandLine.Parameters;
         description = {"Shows what each programme is worth: credited hard sets per muscle and week, stimulating reps, "
                 + "stimulus after fatigue and diminishing returns, and session minutes.",
             "The formulas and defaults are described in docs/model.md."},
-        footer = {"", "Caution: " + Mesolint.CAUTION})
+        footer = {"", ConfigOptions.PRECEDENCE, "", "Caution: " + Mesolint.CAUTION})
 final class MetricsCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "PATH", description = "Programme files or folders.")
@@ -46,23 +46,29 @@ final class MetricsCommand implements Callable<Integer> {
     @Option(names = "--csv", paramLabel = "FILE", description = "Also write one row per set as CSV, for spreadsheets.")
     Path csv;
 
-    @Option(names = "--root", paramLabel = "DIR", description = "Show paths relative to this folder (default: the current folder).")
-    Path root;
+    @Mixin
+    ConfigOptions options;
 
-    @Option(names = "--catalogue", paramLabel = "FILE", description = "An extra catalogue file of exercises (repeatable).")
-    List<Path> catalogues = new ArrayList<>();
+    @Mixin
+    ConfigOptions.Catalogues catalogues;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() throws IOException {
-        Path base = root != null ? root : Path.of("").toAbsolutePath();
-        CheckRequest request = new CheckRequest(paths, base, Severity.ERROR, catalogues, RuleConfiguration.DEFAULTS,
-                YamlLimits.DEFAULTS);
-        RunReport run = new Checker(request, BuiltInRules.all()).run();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        RunReport run;
+        try {
+            // The same repository configuration and profiles as 'check', so the figures use the same parameters.
+            InstalledRules installed = Installed.rules();
+            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, Optional.empty(),
+                    Optional.empty()), installed.rules());
+            run = new Checker(workspace.request(paths), installed.rules()).run();
+        } catch (ConfigProblem e) {
+            return Installed.fail(e, err);
+        }
         run.missing().forEach(m -> err.println("mesolint: no such file or folder: " + m));
         List<FileMetrics> measured = new ArrayList<>();
         boolean unreadable = false;

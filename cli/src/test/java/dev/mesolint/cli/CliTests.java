@@ -39,17 +39,17 @@ class CliTests {
                   - day: 1
                     work:
                       - exercise: barbell-back-squat
-                        sets: 3
+                        sets: 4
                         reps: 8
                         rir: 2
                         rest: 90s
                       - exercise: dumbbell-curl
-                        sets: 3
+                        sets: 4
                         reps: 12
                         rir: 1
                         rest: 30s
                       - exercise: cable-crunch
-                        sets: 2
+                        sets: 4
                         reps: 12
                         rir: 2
                         rest: 60s

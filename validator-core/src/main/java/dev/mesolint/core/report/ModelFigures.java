@@ -2,6 +2,12 @@ package dev.mesolint.core.report;
 
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.RuleConfiguration;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rules.WeeklyVolumeMaxRule;
+import dev.mesolint.core.rules.WeeklyVolumeMinRule;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
@@ -25,6 +31,31 @@ public final class ModelFigures implements ReportFigures {
     /** @param bounds the weekly floor and cap for (profile, muscle) */
     public ModelFigures(BiFunction<String, String, VolumeBounds> bounds) {
         this.bounds = bounds;
+    }
+
+    /**
+     * Figures whose floor and cap are the {@code weekly-volume-min} and {@code weekly-volume-max} limits of each
+     * file's profile, so the chart shows the lines the rules check against (none where a rule is off).
+     */
+    public static ModelFigures underProfiles(RuleConfiguration configuration,
+            List<? extends RuleDefinition> rules) {
+        RuleDefinition min = rules.stream().filter(r -> r.id().equals(WeeklyVolumeMinRule.ID)).findFirst().orElse(null);
+        RuleDefinition max = rules.stream().filter(r -> r.id().equals(WeeklyVolumeMaxRule.ID)).findFirst().orElse(null);
+        return new ModelFigures((profile, muscleName) -> {
+            Muscle muscle = dev.mesolint.core.catalogue.Named.byYamlName(Muscle.class, muscleName).orElseThrow();
+            double floor = 0;
+            double cap = Double.MAX_VALUE;
+            if (min != null) {
+                RuleSettings s = configuration.settingsFor(profile, min);
+                floor = s.severity() == Severity.OFF ? 0 : WeeklyVolumeMinRule.floor(s);
+            }
+            if (max != null) {
+                RuleSettings s = configuration.settingsFor(profile, max);
+                cap = s.severity() == Severity.OFF ? Double.MAX_VALUE : WeeklyVolumeMaxRule.cap(s, muscle);
+            }
+            return cap == Double.MAX_VALUE ? new VolumeBounds(floor, Math.max(floor, VolumeBounds.DEFAULTS.cap()))
+                    : new VolumeBounds(floor, cap);
+        });
     }
 
     @Override

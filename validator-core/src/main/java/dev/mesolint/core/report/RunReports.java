@@ -20,7 +20,7 @@ public final class RunReports {
     public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
             Duration elapsed) {
         return ReportInput.of(run, rules, request.root()).withConfiguration(request.configuration())
-                .withFigures(new ModelFigures((profile, muscle) -> VolumeBounds.DEFAULTS))
+                .withFigures(ModelFigures.underProfiles(request.configuration(), rules))
                 .withElapsed(elapsed);
     }
 

@@ -44,6 +44,6 @@ public final class ConstraintAvoidRule implements Rule {
                 }
             }
         });
-        found.reportAll(context);
+        found.report(context);
     }
 }

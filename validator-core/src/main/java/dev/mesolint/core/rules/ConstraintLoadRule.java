@@ -66,7 +66,7 @@ public final class ConstraintLoadRule implements Rule {
             return;
         }
         OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
-        SetGroups<Hit> groups = new SetGroups<>();
+        Occurrences.SetHits<Hit> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -90,14 +90,16 @@ public final class ConstraintLoadRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<Hit> group : groups.groups()) {
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<Hit> group : groups.groups()) {
             Hit hit = group.values().get(0);
             if (hit.share().isPresent()) {
-                reportOver(context, relation, group, hit);
+                reportOver(context, found, relation, group, hit);
             } else {
-                reportUnknown(context, group, hit);
+                reportUnknown(context, found, group, hit);
             }
         }
+        found.report(context);
     }
 
     /** The set's share of 1RM: stated (or a weight over the known 1RM), else inferred from reps and reserve. */
@@ -111,8 +113,8 @@ public final class ConstraintLoadRule implements Rule {
         return OptionalDouble.of(Relations.shareFor(relation, set.reps() + set.rir().getAsDouble()));
     }
 
-    private static void reportOver(RuleContext context, OneRepMaxRelation relation, SetGroups.Group<Hit> group,
-            Hit hit) {
+    private static void reportOver(RuleContext context, Occurrences found, OneRepMaxRelation relation,
+            Occurrences.Group<Hit> group, Hit hit) {
         SetMetrics set = group.first();
         double share = hit.share().getAsDouble();
         double cap = hit.constraint().maxLoad().get();
@@ -134,12 +136,13 @@ public final class ConstraintLoadRule implements Rule {
             fix = (set.prescription().reps().amrap() ? "reps: " + reps + " with " : "") + "rir: " + rir + " ("
                     + Texts.effort(reps + rir) + " or longer), or state load: " + Texts.loadStepDown(cap);
         }
-        group.report(context, context.severity(), group.label() + ": load " + load + " is above "
+        group.add(found, context.severity(), group.label() + ": load " + load + " is above "
                 + cap(hit, cap), fix + CLINICIAN);
     }
 
     /** A set of a capped region whose load nothing tells: it cannot be checked, which matters for a safety limit. */
-    private static void reportUnknown(RuleContext context, SetGroups.Group<Hit> group, Hit hit) {
+    private static void reportUnknown(RuleContext context, Occurrences found, Occurrences.Group<Hit> group,
+            Hit hit) {
         SetMetrics set = group.first();
         double cap = hit.constraint().maxLoad().get();
         String why = set.prescription().load().isPresent()
@@ -149,7 +152,7 @@ public final class ConstraintLoadRule implements Rule {
         String fix = set.prescription().load().isPresent()
                 ? "add " + set.exerciseId() + " to athlete.one-rep-max, or state rir: on these sets"
                 : "state load: " + Texts.loadStepDown(cap) + " or lighter, or rir: on these sets";
-        group.report(context, Severities.atMost(context.severity(), Severity.WARNING), group.label()
+        group.add(found, Severities.atMost(context.severity(), Severity.WARNING), group.label()
                 + ": the load cannot be checked against " + cap(hit, cap) + ": " + why, fix + CLINICIAN);
     }
 

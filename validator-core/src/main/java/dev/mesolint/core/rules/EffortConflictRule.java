@@ -50,7 +50,7 @@ public final class EffortConflictRule implements Rule {
     @Override
     public void check(RuleContext context) {
         OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
-        SetGroups<SetMetrics> groups = new SetGroups<>();
+        Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -64,12 +64,14 @@ public final class EffortConflictRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<SetMetrics> group : groups.groups()) {
             SetMetrics set = group.first();
             EffortAgreement agreement = set.agreement();
             Severity severity = agreement.status() == AgreementStatus.INFEASIBLE ? Severity.ERROR : context.severity();
-            group.report(context, severity, group.label() + ": " + problem(set, relation), fix(set, relation));
+            group.add(found, severity, group.label() + ": " + problem(set, relation), fix(set, relation));
         }
+        found.report(context);
     }
 
     private static String problem(SetMetrics set, OneRepMaxRelation relation) {

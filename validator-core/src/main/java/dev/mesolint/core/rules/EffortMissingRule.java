@@ -31,7 +31,7 @@ public final class EffortMissingRule implements Rule {
 
     @Override
     public void check(RuleContext context) {
-        SetGroups<SetMetrics> groups = new SetGroups<>();
+        Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -41,11 +41,13 @@ public final class EffortMissingRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
-            group.report(context, context.severity(), group.label() + ": "
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<SetMetrics> group : groups.groups()) {
+            group.add(found, context.severity(), group.label() + ": "
                     + EffortText.reps(group.first().prescription())
                     + " with no effort stated (rir, rpe or load), so these sets never count as hard sets",
                     "add rir: 2 (or rpe: 8, or a load such as load: 70%)");
         }
+        found.report(context);
     }
 }

@@ -20,8 +20,8 @@ public final class FarFromFailureRule implements Rule {
             "Working sets that stop 5 or more reps short of failure give next to no stimulus.", Severity.WARNING,
             RuleMetadata.Category.EFFORT,
             List.of(RuleParameter.number(MIN_RIR, 5, 3, 10,
-                    "reps in reserve from which a working set is reported (the model's reserve: a range counts at "
-                            + "its midpoint, a load alone gives reps to failure minus reps)")),
+                    "Reps in reserve from which a working set is reported (the model's reserve: a range counts "
+                            + "at its midpoint, a load alone gives reps to failure minus reps).")),
             "Growth comes mostly from the last reps before failure, when every motor unit is working and the bar "
                     + "slows. Meta-analyses of proximity to failure find that sets ending within a few reps of "
                     + "failure give clearly more growth than sets ending far from it, and the model gives a set five "
@@ -39,7 +39,7 @@ public final class FarFromFailureRule implements Rule {
     @Override
     public void check(RuleContext context) {
         double minRir = context.param(MIN_RIR);
-        SetGroups<SetMetrics> groups = new SetGroups<>();
+        Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             if (week.deload()) {
                 continue;
@@ -53,17 +53,19 @@ public final class FarFromFailureRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<SetMetrics> group : groups.groups()) {
             SetMetrics set = group.first();
             String written = EffortText.prescription(set.prescription());
             String rir = Texts.num(set.rir().getAsDouble());
             String measured = set.effortSource() == EffortSource.LOAD
                     ? written + " leaves about " + rir + " reps in reserve"
                     : written + " stops " + rir + " reps short of failure";
-            group.report(context, context.severity(), group.label() + ": " + measured + "; the "
+            group.add(found, context.severity(), group.label() + ": " + measured + "; the "
                     + context.profileName() + " profile counts sets " + context.shown(MIN_RIR)
                     + " or more reps short as giving next to no stimulus", fix(context, set));
         }
+        found.report(context);
     }
 
     private static String fix(RuleContext context, SetMetrics set) {

@@ -55,7 +55,7 @@ public final class FatigueTechniqueRule implements Rule {
                                 + "with rest"));
             }
         });
-        found.reportAll(context);
+        found.report(context);
     }
 
     private static String describe(Technique t, String profile) {

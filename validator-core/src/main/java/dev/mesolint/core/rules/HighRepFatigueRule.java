@@ -27,9 +27,9 @@ public final class HighRepFatigueRule implements Rule {
                     + "isolation lifts.",
             Severity.WARNING, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.integer(MIN_EFFORT_REPS, 15, 8, 40,
-                            "reps plus reps in reserve (the set's reps to failure) from which a set is long"),
+                            "Reps plus reps in reserve (the set's reps to failure) from which a set is long."),
                     RuleParameter.number(MAX_RIR, 2, 0, 5,
-                            "most reps in reserve at which a long set counts as taken close to failure")),
+                            "Most reps in reserve at which a long set counts as taken close to failure.")),
             "Past about fifteen reps, a set close to failure piles up fatigue (breathing, metabolites, "
                     + "concentration) faster than it adds growth stimulus: only the last few reps before failure "
                     + "stimulate much, whatever the set's length, while the fatigue keeps rising with every rep and "
@@ -49,7 +49,7 @@ public final class HighRepFatigueRule implements Rule {
     public void check(RuleContext context) {
         double minEffort = context.param(MIN_EFFORT_REPS);
         double maxRir = context.param(MAX_RIR);
-        SetGroups<SetMetrics> groups = new SetGroups<>();
+        Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -64,12 +64,13 @@ public final class HighRepFatigueRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<SetMetrics> group : groups.groups()) {
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<SetMetrics> group : groups.groups()) {
             SetMetrics set = group.first();
             boolean compound = context.exercise(set.exerciseId()).map(Exercise::isCompound).orElse(false);
             Severity severity = compound ? context.severity() : Severities.atMost(context.severity(), Severity.INFO);
             double effort = set.reps() + set.rir().getAsDouble();
-            group.report(context, severity, group.label() + ": "
+            group.add(found, severity, group.label() + ": "
                     + EffortText.prescription(set.prescription()) + " is " + Texts.effort(effort)
                     + " taken close to failure on " + (compound ? "a compound" : "an isolation")
                     + " lift; the " + context.profileName() + " profile flags sets of "
@@ -78,5 +79,6 @@ public final class HighRepFatigueRule implements Rule {
                     "reps: 8-12 with a heavier load, or rir: " + ((int) Math.floor(maxRir) + 1)
                             + " (stop further from failure)");
         }
+        found.report(context);
     }
 }

@@ -28,7 +28,7 @@ public final class LowYieldSetRule implements Rule {
                     + "(earlier sets, short rest).",
             Severity.INFO, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.percent(MIN_SHARE, 0.30, 0.05, 0.9,
-                    "share of its fresh stimulus below which a set is reported")),
+                    "Share of its fresh stimulus below which a set is reported.")),
             "Fatigue from the sets before lowers how much of a muscle a set can still reach, so each further set of "
                     + "the same muscle in a session adds less, the more so the shorter the rests. The model follows "
                     + "the muscle's residual fatigue set by set; a set that keeps under 30% of the stimulus it would "
@@ -51,7 +51,7 @@ public final class LowYieldSetRule implements Rule {
     public void check(RuleContext context) {
         double minShare = context.param(MIN_SHARE);
         double ceiling = context.metrics().parameters().stimulatingRepsCeiling();
-        SetGroups<Hit> groups = new SetGroups<>();
+        Occurrences.SetHits<Hit> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 List<SetMetrics> sets = session.sets();
@@ -72,11 +72,11 @@ public final class LowYieldSetRule implements Rule {
             }
         }
         // Grouped per week (the figures differ from week to week), then merged where a week reads the same.
-        WeekMerge merge = new WeekMerge();
-        for (SetGroups.Group<Hit> group : groups.groups()) {
-            add(context, merge, group);
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<Hit> group : groups.groups()) {
+            add(context, found, group);
         }
-        merge.report(context);
+        found.report(context);
     }
 
     private static int earlier(RuleContext context, List<SetMetrics> sets, int index, Muscle muscle) {
@@ -89,13 +89,13 @@ public final class LowYieldSetRule implements Rule {
         return count;
     }
 
-    private static void add(RuleContext context, WeekMerge merge, SetGroups.Group<Hit> group) {
+    private static void add(RuleContext context, Occurrences found, Occurrences.Group<Hit> group) {
         SetMetrics set = group.first();
         String muscle = Texts.muscle(set.primeMover().orElseThrow());
         List<Hit> hits = group.values();
         String restBefore = hits.stream().allMatch(h -> h.restBefore() == 0) ? "no rest"
                 : span(hits, Hit::restBefore, LowYieldSetRule::seconds) + " rest";
-        String message = group.mergeableLabel() + ": stimulus " + span(hits, Hit::share, LowYieldSetRule::percent)
+        String message = group.label() + ": stimulus " + span(hits, Hit::share, LowYieldSetRule::percent)
                 + " of what the same set gives fresh (the " + context.profileName() + " profile reports under "
                 + context.shown(MIN_SHARE) + "): the " + muscle + " starts " + (hits.size() == 1 ? "it " : "them ")
                 + span(hits, Hit::fatigue, LowYieldSetRule::percent) + " fatigued, after "
@@ -117,7 +117,7 @@ public final class LowYieldSetRule implements Rule {
             fix = "do " + exercise + " earlier in the session, before the exercises that tire the " + muscle
                     + ", or rest longer before it";
         }
-        group.add(merge, context.severity(), message, fix);
+        group.add(found, context.severity(), message, fix);
     }
 
     /** The figure of the first and last hit: {@code 24%}, or {@code 27% to 12%}. */

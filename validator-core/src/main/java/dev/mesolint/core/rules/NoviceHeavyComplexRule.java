@@ -24,8 +24,8 @@ public final class NoviceHeavyComplexRule implements Rule {
                     + "85% of 1RM and up).",
             Severity.WARNING, RuleMetadata.Category.SAFETY,
             List.of(RuleParameter.integer(MAX_EFFORT_REPS, 6, 1, 15,
-                    "reps plus reps in reserve (the set's reps to failure) at or below which a set of a high-skill "
-                            + "lift is heavy; 6 is about 85% of 1RM in NSCA Table 17.7")),
+                    "Reps plus reps in reserve (the set's reps to failure) at or below which a set of a high-skill "
+                            + "lift is heavy; 6 is about 85% of 1RM in NSCA Table 17.7.")),
             "High-skill lifts (the Olympic lifts and their variations, back and front squats, deadlifts, overhead "
                     + "squats) need many practice reps before heavy loads are safe and useful: under a load a lifter "
                     + "can move only about six times, a technique that is not yet automatic breaks down first. The "
@@ -47,7 +47,7 @@ public final class NoviceHeavyComplexRule implements Rule {
         }
         double max = context.param(MAX_EFFORT_REPS);
         OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
-        SetGroups<Double> groups = new SetGroups<>();
+        Occurrences.SetHits<Double> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -67,12 +67,13 @@ public final class NoviceHeavyComplexRule implements Rule {
                 }
             }
         }
-        for (SetGroups.Group<Double> group : groups.groups()) {
+        Occurrences found = new Occurrences();
+        for (Occurrences.Group<Double> group : groups.groups()) {
             SetMetrics set = group.first();
             double effort = group.values().get(0);
             int lightest = (int) max + 1;
             int rir = (int) Math.max(0, Math.ceil(lightest - set.reps()));
-            group.report(context, context.severity(), group.label() + ": "
+            group.add(found, context.severity(), group.label() + ": "
                     + EffortText.prescription(set.prescription()) + " is " + Texts.effort(effort) + " (about "
                     + Texts.percent(Relations.shareFor(relation, effort)) + " of 1RM) on a high-skill lift in a novice "
                     + "programme; the " + context.profileName() + " profile keeps novices above "
@@ -82,5 +83,6 @@ public final class NoviceHeavyComplexRule implements Rule {
                             + " in reserve = " + Texts.effort(lightest) + ", about " + Relations.loadFor(relation,
                             lightest) + " of 1RM), or a lower-skill variation until the technique is sound");
         }
+        found.report(context);
     }
 }

@@ -1,5 +1,9 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
@@ -15,100 +19,172 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 
 /**
- * Collects where a rule's problem occurs across the expanded weeks and reports each written place once, naming the
- * weeks, day and sets it covers: a problem on a line that four repeated weeks copy is one finding, not four.
+ * How every rule reports a problem on a line that repeated weeks copy: once per written place, naming the weeks it
+ * occurs in. A problem on a line that four repeated weeks copy is one finding ({@code weeks 1-4}), not four.
  *
- * <p>Occurrences are merged only when they share the place, the waivers in force and the wording, so a waiver
- * written in one repeated week still applies to that week alone; weeks are merged only when the same sets are
- * affected, so a deload week with one set fewer gets its own finding. Confined to one rule run.
+ * <p>A rule adds one finding per week, with {@link #WEEKS} standing for the week in its message; findings at the
+ * same place, with the same waivers, severity, message and fix are reported once, naming every week they were added
+ * for. So a waiver written in one repeated week still applies to that week alone, and a week whose finding reads
+ * differently (a deload week with one set fewer) gets a finding of its own. Rules add their findings in one of three
+ * ways, all merged here:
+ * <ul>
+ * <li>{@link #add(int, Location, List, Severity, String, String)}: a finding the rule words itself (model rules
+ *     that report a session, through {@link Places});</li>
+ * <li>{@link #add(Week, Session, String, Location, List, Step, String, String)}: the steps (sets, rounds) of an
+ *     exercise that a problem affects, one at a time; the finding names them, and weeks are merged only when the
+ *     same steps are affected ({@code weeks 1-4 day 1 (Lower), sets 1 -> 2, 2 -> 3});</li>
+ * <li>{@link SetHits}: the model rules' per-set hits, grouped by written place; the rule words the finding from
+ *     the group and adds it with {@link Group#add}.</li>
+ * </ul>
+ * Then {@link #report} reports them all. Confined to one rule run for one file.
  */
 final class Occurrences {
-    private final Map<Key, Group> groups = new LinkedHashMap<>();
+    /** Stands for the weeks in a message until the findings are reported: {@code week 2}, {@code weeks 1-4}. */
+    static final String WEEKS = "{weeks}";
 
     /** Which set or round of an exercise an occurrence is about: {@code set 2 -> 3}, {@code round 1}. */
     record Step(String noun, String label) {
         static final Step NONE = new Step("", "");
     }
 
-    private record Key(String pointer, List<Waiver> waivers, String subject, String detail, String fix) {
+    /** A finding as reported, but for its weeks. Location equality includes the line; waivers compare by identity. */
+    private record Finding(Location where, List<Waiver> waivers, Severity severity, String message, String fix) {
     }
 
-    private static final class Group {
+    /** A problem of one exercise at one written place, whose steps are collected week by week. */
+    private record StepKey(String pointer, List<Waiver> waivers, String subject, String detail, String fix) {
+    }
+
+    private static final class Steps {
         final Location where;
         final String day;
         final String noun;
         /** The steps affected in each week, weeks in order. */
-        final Map<Integer, Set<String>> steps = new TreeMap<>();
+        final Map<Integer, Set<String>> byWeek = new TreeMap<>();
 
-        Group(Location where, String day, String noun) {
+        Steps(Location where, String day, String noun) {
             this.where = where;
             this.day = day;
             this.noun = noun;
         }
     }
 
+    private final Map<Finding, TreeSet<Integer>> findings = new LinkedHashMap<>();
+    private final Map<StepKey, Steps> steps = new LinkedHashMap<>();
+
     /**
-     * Records one occurrence.
+     * Adds week {@code week}'s finding; {@link #WEEKS} in {@code message} (its first occurrence) stands for the
+     * weeks. Reported at {@code severity}: {@link RuleContext#severity()}, or a second severity derived from it.
+     */
+    void add(int week, Location where, List<Waiver> waivers, Severity severity, String message, String fix) {
+        findings.computeIfAbsent(new Finding(where, List.copyOf(waivers), severity, message, fix),
+                f -> new TreeSet<>()).add(week);
+    }
+
+    /**
+     * Records that a problem affects one step of an exercise in one week, reported at the rule's severity as
+     * {@code subject, weeks 1-4 day 1 (Lower), sets 1-3: detail}. Occurrences are merged only when they share the
+     * place, the waivers in force and the wording; weeks are merged only when the same steps are affected.
      *
      * @param subject what the finding is about, e.g. the exercise id
+     * @param step    the set or round, or {@link Step#NONE} for a finding about the exercise as a whole
      * @param detail  what was measured against which limit
      */
     void add(Week week, Session session, String subject, Location where, List<Waiver> waivers, Step step,
             String detail, String fix) {
-        Group g = groups.computeIfAbsent(new Key(where.pointer(), waivers, subject, detail, fix),
-                k -> new Group(where, session.label(), step.noun()));
-        Set<String> steps = g.steps.computeIfAbsent(week.number(), w -> new LinkedHashSet<>());
+        Steps s = steps.computeIfAbsent(new StepKey(where.pointer(), waivers, subject, detail, fix),
+                k -> new Steps(where, session.label(), step.noun()));
+        Set<String> labels = s.byWeek.computeIfAbsent(week.number(), w -> new LinkedHashSet<>());
         if (!step.label().isEmpty()) {
-            steps.add(step.label());
+            labels.add(step.label());
         }
     }
 
-    /** Reports one finding per place and set of steps: {@code subject, weeks 1-4 day 1 (Lower), sets 1-3: detail}. */
-    void reportAll(RuleContext context) {
-        for (Map.Entry<Key, Group> e : groups.entrySet()) {
-            Key k = e.getKey();
-            Group g = e.getValue();
-            Map<List<String>, Set<Integer>> weeksBySteps = new LinkedHashMap<>();
-            g.steps.forEach((week, steps) -> weeksBySteps.computeIfAbsent(List.copyOf(steps), s -> new TreeSet<>())
-                    .add(week));
-            weeksBySteps.forEach((steps, weeks) -> context.report(g.where, k.waivers(), k.subject() + ", "
-                    + (weeks.size() == 1 ? "week " : "weeks ") + ranges(weeks) + " " + g.day + steps(g.noun, steps)
-                    + ": " + k.detail(), k.fix()));
-        }
+    /** Reports every finding added, once per place and wording, with the weeks it occurs in. */
+    void report(RuleContext context) {
+        steps.forEach((k, s) -> s.byWeek.forEach((week, labels) -> add(week, s.where, k.waivers(),
+                context.severity(), k.subject() + ", " + WEEKS + " " + s.day + steps(s.noun, List.copyOf(labels))
+                        + ": " + k.detail(), k.fix())));
+        steps.clear();
+        findings.forEach((f, weeks) -> context.report(f.where(), f.waivers(), f.severity(),
+                withWeeks(f.message(), weeks), f.fix()));
+        findings.clear();
     }
 
-    private static String steps(String singular, List<String> steps) {
-        if (steps.isEmpty()) {
+    /** {@code message} with its first {@link #WEEKS} replaced by the weeks (any later one is the user's text). */
+    private static String withWeeks(String message, Set<Integer> weeks) {
+        int at = message.indexOf(WEEKS);
+        return at < 0 ? message
+                : message.substring(0, at) + Texts.weeks(weeks) + message.substring(at + WEEKS.length());
+    }
+
+    /** {@code , sets 1-3}, {@code , rounds 1 -> 2, 2 -> 3}, or nothing for a finding without steps. */
+    private static String steps(String singular, List<String> labels) {
+        if (labels.isEmpty()) {
             return "";
         }
-        String noun = steps.size() == 1 ? singular : singular + "s";
-        if (steps.stream().allMatch(s -> s.matches("\\d+"))) {
-            Set<Integer> numbers = new TreeSet<>();
-            steps.forEach(s -> numbers.add(Integer.parseInt(s)));
-            return ", " + noun + " " + ranges(numbers);
+        String noun = labels.size() == 1 ? singular : singular + "s";
+        if (labels.stream().allMatch(s -> s.matches("\\d+"))) {
+            TreeSet<Integer> numbers = new TreeSet<>();
+            labels.forEach(s -> numbers.add(Integer.parseInt(s)));
+            return ", " + noun + " " + Texts.ranges(numbers);
         }
-        return ", " + noun + " " + String.join(", ", steps);
+        return ", " + noun + " " + String.join(", ", labels);
     }
 
-    /** {@code 1-4, 6} for 1, 2, 3, 4, 6. */
-    static String ranges(Set<Integer> sorted) {
-        List<String> parts = new ArrayList<>();
-        Integer start = null;
-        Integer previous = null;
-        for (int n : sorted) {
-            if (previous != null && n == previous + 1) {
-                previous = n;
-                continue;
-            }
-            if (start != null) {
-                parts.add(start.equals(previous) ? start.toString() : start + "-" + previous);
-            }
-            start = n;
-            previous = n;
+    /**
+     * One model rule's per-set hits, gathered so that sets written once give one finding, not one per set and week:
+     * hits of the same exercise in the same written session, at the same written place, with the same waivers and
+     * the same key form a group, whatever week they fall in. The finding names every week and set of the group.
+     *
+     * @param <T> what the rule keeps of each hit for its message
+     */
+    static final class SetHits<T> {
+        private final Map<List<Object>, Group<T>> groups = new LinkedHashMap<>();
+
+        /**
+         * @param where where the finding points (a field of the set, or the set); compared with its line
+         * @param key   hits with different keys are reported apart: put the measured value or the kind of problem
+         *              in it, and the week number when the message quotes figures that differ from week to week
+         */
+        void add(WeekMetrics week, SessionMetrics session, SetMetrics set, Location where, Object key, T value) {
+            List<Object> id = List.of(session.day(), session.location().pointer(), where, set.exerciseId(),
+                    List.copyOf(set.prescription().waivers()), key);
+            Group<T> group = groups.computeIfAbsent(id,
+                    k -> new Group<>(session, where, new ArrayList<>(), new TreeSet<>(), new ArrayList<>()));
+            group.sets().add(set);
+            group.weeks().add(week.number());
+            group.values().add(value);
         }
-        if (start != null) {
-            parts.add(start.equals(previous) ? start.toString() : start + "-" + previous);
+
+        List<Group<T>> groups() {
+            return List.copyOf(groups.values());
         }
-        return String.join(", ", parts);
+    }
+
+    /** The hits of one place, in the order done; {@link #first()} stands for them in the message. */
+    record Group<T>(SessionMetrics session, Location where, List<SetMetrics> sets, TreeSet<Integer> weeks,
+            List<T> values) {
+
+        SetMetrics first() {
+            return sets.get(0);
+        }
+
+        /** The set numbers, in the order done (several weeks may repeat them). */
+        List<Integer> numbers() {
+            return sets.stream().map(SetMetrics::setNumber).toList();
+        }
+
+        /** {@code barbell-back-squat, {weeks} day 2, sets 1-3}: {@link #WEEKS} becomes the group's weeks. */
+        String label() {
+            return first().exerciseId() + ", " + WEEKS + " day " + session.day() + ", " + Texts.sets(numbers());
+        }
+
+        /** Adds the group's finding to {@code out} for each of its weeks, with the set's waivers. */
+        void add(Occurrences out, Severity severity, String message, String fix) {
+            for (int week : weeks) {
+                out.add(week, where, first().prescription().waivers(), severity, message, fix);
+            }
+        }
     }
 }

@@ -11,7 +11,7 @@ import java.util.Optional;
 
 /**
  * Where the model rules' weekly and per-session findings point (the week or session as written) and which waivers
- * apply there, and how messages name the place. Session and set texts carry {@link WeekMerge#WEEKS} for the week.
+ * apply there, and how messages name the place. Session and set texts carry {@link Occurrences#WEEKS} for the week.
  */
 final class Places {
     private Places() {
@@ -38,7 +38,7 @@ final class Places {
 
     /** {@code {weeks} day 1 (Upper A)}: how session findings name their session. */
     static String session(SessionMetrics session) {
-        return WeekMerge.WEEKS + " " + day(session);
+        return Occurrences.WEEKS + " " + day(session);
     }
 
     /** Reports at the week as written ({@code - week: 2}), with its waivers. */
@@ -49,11 +49,11 @@ final class Places {
     }
 
     /** Adds a finding at the session as written, with its waivers, at the rule's severity. */
-    static void addSession(RuleContext context, WeekMerge merge, WeekMetrics week, SessionMetrics session,
+    static void addSession(RuleContext context, Occurrences found, WeekMetrics week, SessionMetrics session,
             String message, String fix) {
         Optional<Session> written = session(context, week.number(), session);
         Location at = written.map(Session::location).orElse(session.location());
-        merge.add(week.number(), at, written.map(Session::waivers).orElse(List.of()), context.severity(), message,
+        found.add(week.number(), at, written.map(Session::waivers).orElse(List.of()), context.severity(), message,
                 fix);
     }
 }

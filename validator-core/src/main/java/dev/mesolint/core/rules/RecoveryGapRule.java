@@ -25,9 +25,9 @@ public final class RecoveryGapRule implements Rule {
             "A muscle trained with 4 or more hard sets in two sessions is given at least 48 h between them.",
             Severity.WARNING, RuleMetadata.Category.RECOVERY,
             List.of(RuleParameter.integer(MIN_HOURS, 48, 12, 168,
-                            "fewest hours between two sessions that both train a muscle hard (24 h per day)"),
+                            "Fewest hours between two sessions that both train a muscle hard (24 h per day)."),
                     RuleParameter.number(MIN_SETS, 4, 1, 20,
-                            "credited hard sets that make a session train a muscle hard for this rule")),
+                            "Credited hard sets that make a session train a muscle hard for this rule.")),
             "A muscle trained hard needs time before it is trained hard again: the position stands ask for at least "
                     + "48 hours between sessions that stress the same muscles, and the NSCA for at least one rest day "
                     + "(but no more than three) between them. Two sessions that each give a muscle four or more hard "
@@ -60,7 +60,7 @@ public final class RecoveryGapRule implements Rule {
         }
         // The last session that trained each muscle hard, so far along the timeline.
         Map<Muscle, Visit> last = new EnumMap<>(Muscle.class);
-        WeekMerge merge = new WeekMerge();
+        Occurrences found = new Occurrences();
         for (Visit visit : timeline) {
             for (Muscle muscle : visit.session().muscles().keySet()) {
                 if (visit.session().hardSets(muscle) < minSets) {
@@ -72,14 +72,14 @@ public final class RecoveryGapRule implements Rule {
                 }
                 double hours = (double) (visit.blockDay() - before.blockDay()) * HOURS_PER_DAY;
                 if (hours < minHours) {
-                    add(context, merge, muscle, before, visit, hours);
+                    add(context, found, muscle, before, visit, hours);
                 }
             }
         }
-        merge.report(context);
+        found.report(context);
     }
 
-    private static void add(RuleContext context, WeekMerge merge, Muscle muscle, Visit before, Visit visit,
+    private static void add(RuleContext context, Occurrences found, Muscle muscle, Visit before, Visit visit,
             double hours) {
         String name = Texts.muscle(muscle);
         boolean sameWeek = before.week().number() == visit.week().number();
@@ -90,7 +90,7 @@ public final class RecoveryGapRule implements Rule {
         String move = earliestDay <= DAYS_PER_WEEK
                 ? "move " + Places.day(visit.session()) + " to day " + earliestDay + " or later"
                 : "move " + Places.day(before.session()) + " earlier";
-        Places.addSession(context, merge, visit.week(), visit.session(), name + ", " + Places.session(visit.session())
+        Places.addSession(context, found, visit.week(), visit.session(), name + ", " + Places.session(visit.session())
                 + ": " + Texts.sets(visit.session().hardSets(muscle)) + ", " + Texts.num(hours) + " h after "
                 + earlier + "; the " + context.profileName() + " profile asks for at least "
                 + context.shown(MIN_HOURS) + " h between sessions that each give a muscle " + context.shown(MIN_SETS)

@@ -65,7 +65,7 @@ final class RestGaps {
                 }
             }
         }
-        found.reportAll(context);
+        found.report(context);
     }
 
     static String seconds(double s) {

@@ -21,7 +21,7 @@ public final class SessionMuscleVolumeRule implements Rule {
             "No muscle gets more than 10 credited hard sets in one session.", Severity.WARNING,
             RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_SETS, 10, 4, 30,
-                    "most credited hard sets for one muscle in one session (prime mover 1, synergist 0.5)")),
+                    "Most credited hard sets for one muscle in one session (prime mover 1, synergist 0.5).")),
             "More sets give more growth, but with diminishing returns, and within one session the returns fall "
                     + "fastest: each further set of the same muscle starts more fatigued and adds less. Past about "
                     + "ten hard sets for one muscle in a session, the extra sets mostly add fatigue and time; the "
@@ -38,7 +38,7 @@ public final class SessionMuscleVolumeRule implements Rule {
     @Override
     public void check(RuleContext context) {
         double max = context.param(MAX_SETS);
-        WeekMerge merge = new WeekMerge();
+        Occurrences found = new Occurrences();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (Map.Entry<Muscle, MuscleSession> e : session.muscles().entrySet()) {
@@ -49,7 +49,7 @@ public final class SessionMuscleVolumeRule implements Rule {
                     Muscle muscle = e.getKey();
                     Map<String, Double> credited = Contributions.of(context, List.of(session), muscle);
                     double over = Math.ceil(sets - max);
-                    Places.addSession(context, merge, week, session, Places.session(session) + ": "
+                    Places.addSession(context, found, week, session, Places.session(session) + ": "
                             + Texts.sets(sets) + " for the " + Texts.muscle(muscle) + " ("
                             + Contributions.text(credited) + "), over the " + context.shown(MAX_SETS)
                             + " per session the " + context.profileName() + " profile allows",
@@ -58,6 +58,6 @@ public final class SessionMuscleVolumeRule implements Rule {
                 }
             }
         }
-        merge.report(context);
+        found.report(context);
     }
 }

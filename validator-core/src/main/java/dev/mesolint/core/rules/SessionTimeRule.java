@@ -19,7 +19,7 @@ public final class SessionTimeRule implements Rule {
             "The estimated length of each session stays within the programme's session-minutes.", Severity.WARNING,
             RuleMetadata.Category.TIME,
             List.of(RuleParameter.integer(SESSION_MINUTES, 90, 10, 300,
-                    "the time budget per session when the programme states no session-minutes of its own")),
+                    "The time budget per session when the programme states no session-minutes of its own.")),
             "A session that does not fit the time the lifter has gets cut short on the day, and what is dropped is "
                     + "usually the last exercises, not the least useful ones. The estimate adds up the reps (4 s each "
                     + "without a tempo), the rests, the warm-up sets (1.5 min each) and a minute to set up each "
@@ -39,7 +39,7 @@ public final class SessionTimeRule implements Rule {
         String whose = stated.isPresent() ? "the programme's session-minutes: " + Texts.num(budget)
                 : "the " + context.profileName() + " profile's " + context.shown(SESSION_MINUTES) + " minutes (the "
                         + "programme states no session-minutes)";
-        WeekMerge merge = new WeekMerge();
+        Occurrences found = new Occurrences();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 double minutes = session.minutes();
@@ -49,7 +49,7 @@ public final class SessionTimeRule implements Rule {
                 int sets = session.sets().size();
                 double perSet = sets == 0 ? 0 : minutes / sets;
                 long cut = perSet == 0 ? 0 : (long) Math.ceil((minutes - budget) / perSet);
-                Places.addSession(context, merge, week, session, Places.session(session) + ": about "
+                Places.addSession(context, found, week, session, Places.session(session) + ": about "
                         + Math.round(minutes) + " min estimated (" + sets + " working sets with rests, warm-ups and "
                         + "set-ups), over " + whose,
                         (cut > 0 ? "cut about " + cut + " working " + (cut == 1 ? "set" : "sets") + " or shorten "
@@ -57,6 +57,6 @@ public final class SessionTimeRule implements Rule {
                                 + ", or raise session-minutes to " + (long) Math.ceil(minutes));
             }
         }
-        merge.report(context);
+        found.report(context);
     }
 }

@@ -52,6 +52,6 @@ public final class SlowConcentricRule implements Rule {
                         "tempo: " + brisk + " (lift with control, as fast as the load allows)");
             }
         });
-        found.reportAll(context);
+        found.report(context);
     }
 }

@@ -54,7 +54,7 @@ public final class UnstableSurfaceRule implements Rule {
                             "use a stable version of the movement")
                             + ", or waive this rule with the reason if balance work is the aim");
         });
-        found.reportAll(context);
+        found.report(context);
     }
 
     /**

@@ -20,11 +20,11 @@ public final class VolumeSpikeRule implements Rule {
             "A muscle's weekly hard sets stay within 1.5 x the mean of the up to four weeks before.",
             Severity.WARNING, RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_RATIO, 1.5, 1.1, 4,
-                            "largest ratio of a week's hard sets to the mean of the weeks before (the model's "
-                                    + "acute:chronic figure; the number of weeks is the model's acuteChronicWeeks)"),
+                            "Largest ratio of a week's hard sets to the mean of the weeks before (the model's "
+                                    + "acute:chronic figure; the number of weeks is the model's acuteChronicWeeks)."),
                     RuleParameter.number(MIN_ADDED_SETS, 3, 0, 20,
-                            "fewest hard sets above that mean that make a jump worth reporting, so that small muscles "
-                                    + "going from 1 to 2 sets are not called a spike")),
+                            "Fewest hard sets above that mean that make a jump worth reporting, so that small muscles "
+                                    + "going from 1 to 2 sets are not called a spike.")),
             "Gabbett's acute:chronic workload ratio compares a week's load with the rolling mean of the four weeks "
                     + "before; in team sports, weeks well above about 1.5 times that mean went with more injuries. "
                     + "Applied to weekly hard sets per muscle, it asks that volume rise in steps the body has been "

@@ -30,11 +30,11 @@ public final class WeeklyVolumeMaxRule implements Rule {
             "No muscle gets more than 20 credited hard sets in a week.", Severity.WARNING,
             RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_SETS, 20, 8, 60,
-                            "most credited hard sets for one muscle in a week (prime mover 1, synergist 0.5)"),
+                            "Most credited hard sets for one muscle in a week (prime mover 1, synergist 0.5)."),
                     RuleParameter.number(MAX_SETS_COMPETITION, 20, 8, 60,
-                            "the limit instead for the prime movers of the squat, bench press and deadlift "
+                            "The limit instead for the prime movers of the squat, bench press and deadlift "
                                     + "(quadriceps, glutes, chest, hamstrings, lower-back); the strength profile "
-                                    + "raises it")),
+                                    + "raises it.")),
             "Growth rises with weekly sets per muscle, but the dose-response meta-analyses find diminishing returns, "
                     + "and few studies go beyond about twenty sets a week; past that, recovery rather than volume "
                     + "becomes the limit for most lifters, and joints and tendons take the same load. The limit of 20 "
@@ -45,6 +45,11 @@ public final class WeeklyVolumeMaxRule implements Rule {
             "Schoenfeld, Ogborn & Krieger 2017, J Sports Sci 35(11):1073-1082; Pelland et al. 2024 (diminishing "
                     + "returns; fractional counting); the 20-set limit is common practice drawn from that "
                     + "dose-response literature");
+
+    /** The weekly cap for {@code muscle} under {@code settings}: the competition lifts' prime movers have their own. */
+    public static double cap(dev.mesolint.core.rule.RuleSettings settings, Muscle muscle) {
+        return settings.value(COMPETITION_PRIME_MOVERS.contains(muscle) ? MAX_SETS_COMPETITION : MAX_SETS);
+    }
 
     @Override
     public RuleMetadata metadata() {

@@ -24,7 +24,7 @@ public final class WeeklyVolumeMinRule implements Rule {
                     + "hard sets a week; deload weeks are skipped.",
             Severity.INFO, RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MIN_SETS, 4, 1, 20,
-                    "fewest credited hard sets a week for a muscle the programme trains directly")),
+                    "Fewest credited hard sets a week for a muscle the programme trains directly.")),
             "Weekly sets per muscle drive growth, and the dose-response meta-analyses find small effects at the "
                     + "lowest volumes. When a programme gives a muscle an exercise of its own but fewer than about "
                     + "four hard sets in the week, the exercise costs a place in the session for little return: add "
@@ -34,6 +34,11 @@ public final class WeeklyVolumeMinRule implements Rule {
             "Schoenfeld, Ogborn & Krieger 2017, J Sports Sci 35(11):1073-1082; Pelland et al. 2024; ACSM 2009 "
                     + "position stand (Ratamess et al., MSSE 41(3):687-708); the 4-set threshold is common practice "
                     + "drawn from that dose-response literature");
+
+    /** The weekly floor under {@code settings}. */
+    public static double floor(dev.mesolint.core.rule.RuleSettings settings) {
+        return settings.value(MIN_SETS);
+    }
 
     @Override
     public RuleMetadata metadata() {

@@ -34,12 +34,12 @@ class WorkspaceTests {
                   - day: 1
                     work:
                       - exercise: barbell-back-squat
-                        sets: 3
+                        sets: 4
                         reps: 5
                         rir: 2
                         rest: 2.5min
                       - exercise: stability-ball-dumbbell-press
-                        sets: 3
+                        sets: 4
                         reps: 10
                         rir: 2
                         rest: 2min

@@ -43,4 +43,18 @@ class ModelFiguresTests {
         assertEquals(0.0, figures.weeklySetBounds("forearms").floor(), "forearms are only credited as synergists");
         assertEquals(20.0, figures.weeklySetBounds("forearms").cap());
     }
+
+    @Test
+    void underAProfileTheLinesAreTheRulesLimits() throws Exception {
+        var options = new dev.mesolint.core.engine.RunOptions(SAMPLE.getParent(), java.util.Optional.empty(),
+                java.util.Optional.of("strength"), java.util.Optional.empty(), List.of(), java.util.Optional.empty());
+        var workspace = dev.mesolint.core.engine.Workspace.open(options, BuiltInRules.all());
+        FileReport file = new Checker(workspace.request(List.of(SAMPLE)), BuiltInRules.all()).run().files().get(0);
+        ProgrammeFigures figures = ModelFigures.underProfiles(workspace.configuration(), BuiltInRules.all()).of(file)
+                .orElseThrow();
+        // the strength profile allows 25 weekly sets for the competition lifts' prime movers, 20 for the rest
+        assertEquals(25.0, figures.weeklySetBounds("quadriceps").cap());
+        assertEquals(20.0, figures.weeklySetBounds("lats").cap());
+        assertEquals(4.0, figures.weeklySetBounds("lats").floor());
+    }
 }

@@ -30,6 +30,7 @@ class RulePackTests {
     @TempDir
     Path root;
 
+    /** Seven exercises of two sets, paired so that each muscle they train directly gets four hard sets. */
     private static final String PROGRAMME = """
             format: 1
             programme:
@@ -41,7 +42,14 @@ class RulePackTests {
                 sessions:
                   - day: 2
                     work:
-            """ + "          - {exercise: goblet-squat, sets: 2, reps: 10, rir: 3, rest: 2min}\n".repeat(7);
+                      - {exercise: goblet-squat, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: machine-leg-press, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: push-up, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: machine-chest-press, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: seated-cable-row, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: machine-chest-supported-row, sets: 2, reps: 10, rir: 3, rest: 2min}
+                      - {exercise: glute-bridge, sets: 2, reps: 10, rir: 3, rest: 2min}
+            """;
 
     @Test
     void thePackOnTheClassPathIsLoadedAfterTheBuiltInRules() throws ConfigProblem {
