@@ -2,23 +2,14 @@ package dev.mesolint.maven;
 
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.cache.CachedCheck;
-import dev.mesolint.core.cache.ResultCache;
-import dev.mesolint.core.config.ConfigProblem;
-import dev.mesolint.core.engine.RunReport;
-import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.report.ReportFormat;
-import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
-import dev.mesolint.core.rule.RuleDefinition;
-import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.File;
-import java.io.IOException;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.stream.Collectors;
 import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -143,13 +134,16 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         if (useCache() && figures) {
             getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
         }
-        RunSettings.Prepared prepared = prepare();
-        List<RuleDefinition> rules = prepared.rules();
+        RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile, failOn,
+                catalogues == null ? List.of() : catalogues, baseline).prepare();
+        prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
+        CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
-        CachedCheck.Outcome outcome = check(prepared, rules, useCache() && !figures);
+        CachedCheck.Outcome outcome = execution.check(useCache() && !figures
+                ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
         if (!targets.isEmpty()) {
-            writeReports(RunReports.input(outcome.report(), rules, prepared.request(),
-                    Duration.ofNanos(System.nanoTime() - started)), targets);
+            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
+                    outputDirectory.toPath());
         }
         afterCheck(outcome);
     }
@@ -172,80 +166,5 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             targets.add(RunReports.inFolder(format, outputDirectory.toPath()));
         }
         return targets;
-    }
-
-    private RunSettings.Prepared prepare() throws MojoExecutionException {
-        RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile, failOn,
-                catalogues == null ? List.of() : catalogues, baseline).prepare();
-        prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
-        return prepared;
-    }
-
-    private void writeReports(ReportInput input, List<ReportTarget> targets) throws MojoExecutionException {
-        try {
-            RunReports.writeAll(input, targets);
-        } catch (IOException e) {
-            throw new MojoExecutionException("mesolint: cannot write the reports to " + outputDirectory + ": "
-                    + e.getMessage(), e);
-        }
-        getLog().info("mesolint: reports written to " + outputDirectory + ": " + targets.stream()
-                .map(t -> t.path().getFileName().toString()).collect(Collectors.joining(", ")));
-    }
-
-    private CachedCheck.Outcome check(RunSettings.Prepared prepared, List<RuleDefinition> rules, boolean cached)
-            throws MojoExecutionException {
-        Optional<ResultCache> cache = Optional.empty();
-        if (cached) {
-            ResultCache opened = ResultCache.open(outputDirectory.toPath().resolve("cache.json"), prepared.key());
-            opened.discarded().ifPresent(why -> getLog().debug("mesolint: not reusing earlier results: " + why));
-            cache = Optional.of(opened);
-        }
-        CachedCheck.Outcome outcome;
-        try {
-            outcome = new CachedCheck(prepared.request(), rules).run(cache);
-        } catch (IOException e) {
-            throw new MojoExecutionException("mesolint: cannot read the programmes: " + e.getMessage(), e);
-        }
-        if (cache.isPresent()) {
-            save(cache.get());
-        }
-        if (outcome.reused() > 0) {
-            getLog().info("mesolint: " + outcome.reused() + " programme" + (outcome.reused() == 1 ? "" : "s")
-                    + " unchanged, results reused from cache" + (outcome.checked() > 0 ? "; " + outcome.checked()
-                    + " checked" : ""));
-        }
-        if (ignoreBaseline) {
-            getLog().debug("mesolint: baseline ignored (plugin parameter ignoreBaseline)");
-            return outcome;
-        }
-        try {
-            // After the cache: it keeps the findings themselves, so editing the baseline never invalidates it.
-            RunReport compared = prepared.workspace().applyBaseline(outcome.report());
-            return new CachedCheck.Outcome(compared, outcome.reused(), outcome.checked(), outcome.unreadable());
-        } catch (ConfigProblem e) {
-            throw RunSettings.problem(e);
-        }
-    }
-
-    private void save(ResultCache cache) {
-        try {
-            cache.save();
-        } catch (IOException e) {
-            getLog().warn("mesolint: could not write the result cache " + cache.file() + ": " + e.getMessage()
-                    + "; the next build checks every programme again");
-        }
-    }
-
-    /** Files that could not be read, or that mesolint failed on, are a BUILD ERROR, not a finding to fix. */
-    static void failOnBrokenRun(CachedCheck.Outcome outcome) throws MojoExecutionException {
-        if (!outcome.unreadable().isEmpty()) {
-            throw new MojoExecutionException("mesolint: cannot read " + outcome.unreadable());
-        }
-        List<Finding> internal = outcome.report().active().stream()
-                .filter(f -> f.ruleId().equals(InternalErrorRule.ID)).toList();
-        if (!internal.isEmpty()) {
-            throw new MojoExecutionException("mesolint failed while checking " + internal.size()
-                    + " file(s); see the " + InternalErrorRule.ID + " findings above");
-        }
     }
 }

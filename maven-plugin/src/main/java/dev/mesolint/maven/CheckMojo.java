@@ -44,7 +44,7 @@ public class CheckMojo extends AbstractMesolintMojo {
     void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException, MojoFailureException {
         RunReport run = outcome.report();
         new FindingLog(getLog(), showWaived).write(run);
-        failOnBrokenRun(outcome);
+        CheckExecution.failOnBrokenRun(outcome);
         if (run.failed()) {
             throw new MojoFailureException(failureMessage(run));
         }

@@ -43,6 +43,6 @@ public class ReportMojo extends AbstractMesolintMojo {
     @Override
     void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException {
         getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        failOnBrokenRun(outcome);
+        CheckExecution.failOnBrokenRun(outcome);
     }
 }
