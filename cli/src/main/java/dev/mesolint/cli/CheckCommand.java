@@ -87,7 +87,7 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         Optional<Severity> level = Optional.empty();
         if (failOn != null) {
-            level = Optional.of(Severity.parse(failOn).filter(s -> s != Severity.OFF).orElseThrow(() ->
+            level = Optional.of(Severity.parseFailLevel(failOn).orElseThrow(() ->
                     new CommandLine.ParameterException(spec.commandLine(),
                             "--fail-on must be error, warning or info, not '" + failOn + "'")));
         }

@@ -39,7 +39,7 @@ public final class RepositoryConfigReader {
         Optional<Severity> failOn = Optional.empty();
         if (root.has("fail-on")) {
             String text = doc.scalar(root.get("fail-on"), "/fail-on", "fail-on: warning");
-            failOn = Optional.of(Severity.parse(text).filter(s -> s != Severity.OFF).orElseThrow(() -> doc.problemAt(
+            failOn = Optional.of(Severity.parseFailLevel(text).orElseThrow(() -> doc.problemAt(
                     "/fail-on", "fail-on '" + text + "' is not a level", "one of: error, warning, info")));
         }
         Optional<Path> baseline = Optional.empty();
