@@ -1,11 +1,16 @@
 package dev.mesolint.core.model;
 
 import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.value.LoadUnit;
+import java.util.Collections;
 import java.util.Comparator;
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -17,13 +22,17 @@ import java.util.Optional;
  * @param units       the unit of every volume load
  * @param parameters  the parameters the figures were computed with
  * @param weeks       in week-number order
+ * @param directlyTrained the muscles some set trains as a prime mover (credit 1), each with the first exercise
+ *                    that does, in muscle order: the muscles weekly floors apply to
  */
 public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParameters parameters,
-        List<WeekMetrics> weeks) {
+        List<WeekMetrics> weeks, Map<Muscle, String> directlyTrained) {
 
     public ProgrammeMetrics {
         Objects.requireNonNull(parameters, "parameters");
         weeks = List.copyOf(weeks);
+        directlyTrained = Collections.unmodifiableMap(new EnumMap<>(directlyTrained.isEmpty()
+                ? new EnumMap<Muscle, String>(Muscle.class) : directlyTrained));
     }
 
     /**
@@ -38,7 +47,19 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
                 .sorted(Comparator.comparingInt(Week::number))
                 .map(w -> calculator.compute(w, effective, programme.athlete(), units))
                 .toList();
-        return new ProgrammeMetrics(programme.info().id(), units, params, new TrendCalculator(params).withTrends(weeks));
+        return new ProgrammeMetrics(programme.info().id(), units, params, new TrendCalculator(params).withTrends(weeks),
+                directlyTrained(weeks, effective));
+    }
+
+    private static Map<Muscle, String> directlyTrained(List<WeekMetrics> weeks, Catalogue catalogue) {
+        Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
+        weeks.forEach(week -> week.sessions().forEach(session -> session.sets().forEach(set ->
+                catalogue.find(set.exerciseId()).ifPresent(e -> e.muscles().forEach((muscle, credit) -> {
+                    if (credit >= Exercise.PRIME_MOVER) {
+                        direct.putIfAbsent(muscle, e.id());
+                    }
+                })))));
+        return direct;
     }
 
     /** Computes the figures with {@link ModelParameters#defaults()}. */

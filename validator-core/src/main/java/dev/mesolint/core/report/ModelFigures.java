@@ -68,11 +68,10 @@ public final class ModelFigures implements ReportFigures {
         OptionalDouble budget = file.programme().get().info().sessionMinutes().map(OptionalDouble::of)
                 .orElse(OptionalDouble.empty());
         String profile = file.profile();
-        // The floor applies only to muscles the programme trains directly (a prime mover of some set), as the
-        // weekly-volume-min rule does; muscles trained only as synergists are not expected to reach it.
+        // The floor applies only to muscles the programme trains directly, as the weekly-volume-min rule reads them;
+        // muscles trained only as synergists are not expected to reach it.
         java.util.Set<String> direct = new java.util.HashSet<>();
-        metrics.weeks().forEach(w -> w.sessions().forEach(s -> s.sets().forEach(
-                set -> set.primeMover().ifPresent(m -> direct.add(m.yamlName())))));
+        metrics.directlyTrained().keySet().forEach(m -> direct.add(m.yamlName()));
         return Optional.of(new ProgrammeFigures() {
             @Override
             public String file() {

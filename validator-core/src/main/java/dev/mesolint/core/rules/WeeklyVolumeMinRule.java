@@ -1,16 +1,12 @@
 package dev.mesolint.core.rules;
 
-import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
-import dev.mesolint.core.model.SessionMetrics;
-import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
-import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 
@@ -48,7 +44,7 @@ public final class WeeklyVolumeMinRule implements Rule {
     @Override
     public void check(RuleContext context) {
         double min = context.param(MIN_SETS);
-        Map<Muscle, String> direct = directlyTrained(context);
+        Map<Muscle, String> direct = context.metrics().directlyTrained();
         for (WeekMetrics week : context.metrics().weeks()) {
             if (week.deload()) {
                 continue;
@@ -70,19 +66,5 @@ public final class WeeklyVolumeMinRule implements Rule {
     }
 
     /** Each muscle that is a prime mover (credit 1) of an exercise the programme does, with the first such exercise. */
-    private static Map<Muscle, String> directlyTrained(RuleContext context) {
-        Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
-        for (WeekMetrics week : context.metrics().weeks()) {
-            for (SessionMetrics session : week.sessions()) {
-                for (SetMetrics set : session.sets()) {
-                    context.exercise(set.exerciseId()).ifPresent(e -> e.muscles().forEach((muscle, credit) -> {
-                        if (credit >= Exercise.PRIME_MOVER) {
-                            direct.putIfAbsent(muscle, e.id());
-                        }
-                    }));
-                }
-            }
-        }
-        return direct;
-    }
+
 }

@@ -40,6 +40,7 @@ class ModelFiguresTests {
     void theFloorAppliesOnlyToMusclesTrainedDirectly() {
         ProgrammeFigures figures = new ModelFigures((p, m) -> VolumeBounds.DEFAULTS).of(checked()).orElseThrow();
         assertEquals(4.0, figures.weeklySetBounds("chest").floor(), "chest is a prime mover of the bench press");
+        assertEquals(4.0, figures.weeklySetBounds("glutes").floor(), "credit 1 in the squat, though listed second");
         assertEquals(0.0, figures.weeklySetBounds("forearms").floor(), "forearms are only credited as synergists");
         assertEquals(20.0, figures.weeklySetBounds("forearms").cap());
     }
