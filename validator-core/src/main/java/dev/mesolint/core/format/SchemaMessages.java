@@ -86,10 +86,51 @@ final class SchemaMessages {
                 String name = Pointers.lastSegment(pointer);
                 JsonNode value = error.getInstanceNode();
                 String found = value == null ? "" : " (found " + shown(value) + ")";
-                return new Violation(at, where(pointer) + ": " + plain(error.getMessage()) + found,
+                String problem = switch (keyword) {
+                    case "type" -> "must be " + kinds(error.getSchemaNode()) + ", not " + kind(value);
+                    case "pattern" -> "is not written in an accepted form";
+                    default -> plain(error.getMessage());
+                };
+                return new Violation(at, where(pointer) + " " + problem + found,
                         hint(name).orElse("see docs/format.md for the allowed values"));
             }
         }
+    }
+
+    /** The JSON Schema type(s) a key accepts, in words an author knows from YAML. */
+    private static String kinds(JsonNode type) {
+        if (type == null) {
+            return "another kind of value";
+        }
+        if (type.isArray()) {
+            java.util.List<String> words = new java.util.ArrayList<>();
+            type.forEach(t -> words.add(word(t.asString())));
+            return String.join(" or ", words);
+        }
+        return word(type.asString());
+    }
+
+    private static String kind(JsonNode value) {
+        if (value == null || value.isNull()) {
+            return "empty";
+        }
+        if (value.isIntegralNumber()) {
+            return "a whole number";
+        }
+        return value.isNumber() ? "a number" : value.isBoolean() ? "true/false" : value.isArray() ? "a list"
+                : value.isObject() ? "a mapping" : "text";
+    }
+
+    private static String word(String jsonType) {
+        return switch (jsonType) {
+            case "string" -> "text";
+            case "integer" -> "a whole number";
+            case "number" -> "a number";
+            case "boolean" -> "true or false";
+            case "array" -> "a list";
+            case "object" -> "a mapping (key: value lines)";
+            default -> jsonType;
+        };
     }
 
     private static String anyOfMessage(String pointer) {
