@@ -175,9 +175,9 @@ final class Occurrences {
             return sets.stream().map(SetMetrics::setNumber).toList();
         }
 
-        /** {@code barbell-back-squat, {weeks} day 2, sets 1-3}: {@link #WEEKS} becomes the group's weeks. */
+        /** {@code barbell-back-squat, {weeks} day 2 (Lower), sets 1-3}: {@link #WEEKS} becomes the group's weeks. */
         String label() {
-            return first().exerciseId() + ", " + WEEKS + " day " + session.day() + ", " + Texts.sets(numbers());
+            return first().exerciseId() + ", " + WEEKS + " " + Places.day(session) + ", " + Texts.sets(numbers());
         }
 
         /** Adds the group's finding to {@code out} for each of its weeks, with the set's waivers. */
