@@ -8,6 +8,7 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -52,19 +53,17 @@ public final class CachedCheck {
             throw e.getCause();
         }
         Supplier<Checker> checker = lazily(() -> new Checker(request, rules));
-        List<Pending> pending = files.stream().map(f -> pending(f, cache)).toList();
-
         List<FileReport> reports = new ArrayList<>(cache.flatMap(ResultCache::catalogueReports)
                 .orElseGet(() -> checker.get().catalogueReports()));
-        reports.addAll(pending.parallelStream()
-                .map(p -> p.cached().orElseGet(() -> checker.get().checkFile(p.file())))
-                .toList());
+        int catalogues = reports.size();
+        // Each file is read once, in parallel: its bytes are hashed, and parsed only when the cache has no result.
+        List<Pending> pending = files.parallelStream().map(f -> pending(f, cache, checker)).toList();
+        pending.forEach(p -> reports.add(p.report()));
 
-        int reused = (int) pending.stream().filter(p -> p.cached().isPresent()).count();
+        int reused = (int) pending.stream().filter(Pending::reused).count();
         List<Path> unreadable = pending.stream().filter(p -> p.hash() == null).map(Pending::file).toList();
         if (cache.isPresent()) {
             ResultCache c = cache.get();
-            int catalogues = reports.size() - pending.size();
             c.putCatalogueReports(reports.subList(0, catalogues));
             for (int i = 0; i < pending.size(); i++) {
                 Pending p = pending.get(i);
@@ -77,19 +76,22 @@ public final class CachedCheck {
         return new Outcome(report, reused, pending.size() - reused, unreadable);
     }
 
-    /** A file to report on: its hash (null when unreadable) and the cached report when still valid. */
-    private record Pending(Path file, String shown, String hash, Optional<FileReport> cached) {
+    /** A file's report: its hash (null when unreadable), and whether the report came from the cache. */
+    private record Pending(Path file, String shown, String hash, FileReport report, boolean reused) {
     }
 
-    private Pending pending(Path file, Optional<ResultCache> cache) {
+    private Pending pending(Path file, Optional<ResultCache> cache, Supplier<Checker> checker) {
         String shown = ProgrammeFiles.display(request.root(), file);
-        String hash;
+        byte[] content;
         try {
-            hash = ContentHash.ofFile(file);
+            content = Files.readAllBytes(file);
         } catch (IOException e) {
-            return new Pending(file, shown, null, Optional.empty());
+            return new Pending(file, shown, null, checker.get().checkFile(file), false);
         }
-        return new Pending(file, shown, hash, cache.flatMap(c -> c.lookup(shown, hash)));
+        String hash = ContentHash.of(content);
+        Optional<FileReport> cached = cache.flatMap(c -> c.lookup(shown, hash));
+        return cached.map(r -> new Pending(file, shown, hash, r, true))
+                .orElseGet(() -> new Pending(file, shown, hash, checker.get().checkFile(file, content), false));
     }
 
     private static <T> Supplier<T> lazily(Supplier<T> make) {

@@ -75,19 +75,24 @@ public final class Checker {
         List<Path> missing = new ArrayList<>();
         List<Path> files = ProgrammeFiles.discover(request.inputs(), missing);
         List<FileReport> reports = new ArrayList<>(catalogueReports);
-        reports.addAll(files.parallelStream().map(this::checkSafely).toList());
+        reports.addAll(files.parallelStream().map(this::checkFile).toList());
         return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
     }
 
     /** Checks one programme file; any failure becomes a finding on that file, never an exception. */
     public FileReport checkFile(Path file) {
-        return checkSafely(file);
+        return checkSafely(file, () -> reader.read(file));
     }
 
-    private FileReport checkSafely(Path file) {
+    /** Checks a programme file whose content the caller has already read (to hash it, say): no second read. */
+    public FileReport checkFile(Path file, byte[] content) {
+        return checkSafely(file, () -> reader.read(content));
+    }
+
+    private FileReport checkSafely(Path file, DocumentSource source) {
         String shown = ProgrammeFiles.display(request.root(), file);
         try {
-            return check(file, shown);
+            return check(source, shown);
         } catch (RuntimeException | StackOverflowError e) {
             String cause = e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
             return violationReport(shown, null, InternalErrorRule.ID, List.of(new Violation(Location.START,
@@ -96,10 +101,16 @@ public final class Checker {
         }
     }
 
-    FileReport check(Path file, String shown) {
+    /** Where a file's document comes from: read from disk, or parsed from bytes already read. */
+    @FunctionalInterface
+    private interface DocumentSource {
+        LocatedDocument read() throws IOException, YamlProblem;
+    }
+
+    private FileReport check(DocumentSource source, String shown) {
         LocatedDocument document;
         try {
-            document = reader.read(file);
+            document = source.read();
         } catch (YamlProblem e) {
             return violationReport(shown, null, YamlSyntaxRule.ID,
                     List.of(new Violation(e.location(), e.getMessage(), e.hint())));

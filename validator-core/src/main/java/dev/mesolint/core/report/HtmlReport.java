@@ -212,7 +212,7 @@ public final class HtmlReport implements ReportWriter {
                 .append(Html.esc(f.ruleId())).append("</a>")
                 .append("<a class=\"where\" href=\"").append(Html.esc(link(input, f))).append("\">")
                 .append(Html.esc(f.file() + ":" + f.location().line() + ":" + f.location().column())).append("</a>");
-        if (input.baseline().contains(f)) {
+        if (f.baselined()) {
             page.append("<span class=\"path\">in baseline</span>");
         }
         page.append("</div><p class=\"message\">").append(Html.esc(f.message())).append("</p><p class=\"fix\">")

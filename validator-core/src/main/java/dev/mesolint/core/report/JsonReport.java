@@ -42,7 +42,7 @@ public final class JsonReport implements ReportWriter {
         summary.put("info", run.count(Severity.INFO));
         summary.put("waived", run.waivedCount());
         summary.put("baselined", run.files().stream().flatMap(f -> f.findings().stream())
-                .filter(f -> !f.waived()).filter(input.baseline()::contains).count());
+                .filter(f -> !f.waived()).filter(Finding::baselined).count());
         ArrayNode missing = doc.putArray("missing");
         run.missing().forEach(missing::add);
         ArrayNode files = doc.putArray("files");
@@ -84,7 +84,7 @@ public final class JsonReport implements ReportWriter {
         node.put("fix", f.fix());
         node.put("helpUri", RuleDocs.uri(f.ruleId()));
         node.put("fingerprint", Fingerprints.hash(f));
-        node.put("baselined", input.baseline().contains(f));
+        node.put("baselined", f.baselined());
         f.waiver().ifPresent(w -> node.putObject("waiver").put("reason", w.reason())
                 .put("line", w.location().line()).put("column", w.location().column())
                 .put("wholeFile", w.wholeFile()));

@@ -11,7 +11,7 @@ import java.util.Objects;
 
 /**
  * Everything a report writer reads: the run, the registered rules and how they were configured, the folder paths are
- * relative to, and optional extras (training figures, a baseline, the run's duration).
+ * relative to, and optional extras (training figures, the run's duration; baselined findings are marked on the findings themselves).
  *
  * <p>The findings-only formats (SARIF, JUnit, JSON findings, console) need nothing beyond the run and the rules.
  *
@@ -20,7 +20,7 @@ import java.util.Objects;
  * @param elapsed how long the run took; {@link Duration#ZERO} when not measured
  */
 public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
-        ReportFigures figures, Baseline baseline, Duration elapsed) {
+        ReportFigures figures, Duration elapsed) {
 
     public ReportInput {
         Objects.requireNonNull(run, "run");
@@ -28,30 +28,24 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
         Objects.requireNonNull(configuration, "configuration");
         root = root.toAbsolutePath().normalize();
         Objects.requireNonNull(figures, "figures");
-        Objects.requireNonNull(baseline, "baseline");
         Objects.requireNonNull(elapsed, "elapsed");
     }
 
-    /** Default configuration, no figures, no baseline, duration not measured. */
+    /** Default configuration, no figures, duration not measured. */
     public static ReportInput of(RunReport run, List<RuleDefinition> rules, Path root) {
-        return new ReportInput(run, rules, RuleConfiguration.DEFAULTS, root, ReportFigures.NONE, Baseline.NONE,
-                Duration.ZERO);
+        return new ReportInput(run, rules, RuleConfiguration.DEFAULTS, root, ReportFigures.NONE, Duration.ZERO);
     }
 
     public ReportInput withConfiguration(RuleConfiguration newConfiguration) {
-        return new ReportInput(run, rules, newConfiguration, root, figures, baseline, elapsed);
+        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed);
     }
 
     public ReportInput withFigures(ReportFigures newFigures) {
-        return new ReportInput(run, rules, configuration, root, newFigures, baseline, elapsed);
-    }
-
-    public ReportInput withBaseline(Baseline newBaseline) {
-        return new ReportInput(run, rules, configuration, root, figures, newBaseline, elapsed);
+        return new ReportInput(run, rules, configuration, root, newFigures, elapsed);
     }
 
     public ReportInput withElapsed(Duration newElapsed) {
-        return new ReportInput(run, rules, configuration, root, figures, baseline, newElapsed);
+        return new ReportInput(run, rules, configuration, root, figures, newElapsed);
     }
 
     /** The rules that run on a file checked under {@code profile}: the registered rules that are not off there. */

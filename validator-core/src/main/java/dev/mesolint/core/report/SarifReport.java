@@ -120,7 +120,7 @@ public final class SarifReport implements ReportWriter {
                     .put("fullyQualifiedName", f.location().pointer()).put("kind", "element");
         }
         result.putObject("partialFingerprints").put(FINGERPRINT_KEY, Fingerprints.hash(f));
-        result.put("baselineState", input.baseline().contains(f) ? "unchanged" : "new");
+        result.put("baselineState", f.baselined() ? "unchanged" : "new");
         f.waiver().ifPresent(w -> {
             ObjectNode suppression = result.putArray("suppressions").addObject();
             suppression.put("kind", "inSource");

@@ -36,23 +36,25 @@ public final class LocatedYamlReader {
         this.limits = limits;
     }
 
+    /** Reads a file; its size is checked before it is read, so a huge file costs nothing. */
     public LocatedDocument read(Path file) throws IOException, YamlProblem {
-        long size = Files.size(file);
+        checkSize(Files.size(file));
+        return read(Files.readAllBytes(file));
+    }
+
+    /** Reads content already in memory (e.g. read once to hash it). */
+    public LocatedDocument read(byte[] bytes) throws YamlProblem {
+        checkSize(bytes.length);
+        return read(decode(bytes));
+    }
+
+    private void checkSize(long size) throws YamlProblem {
         if (size > limits.maxFileBytes()) {
             throw new YamlProblem(String.format("the file is %.1f MB, over the %.1f MB limit for one programme",
                     size / 1048576.0, limits.maxFileBytes() / 1048576.0),
                     "split the block into several programme files, or check that this is a programme at all",
                     Location.START);
         }
-        return read(Files.readAllBytes(file));
-    }
-
-    public LocatedDocument read(byte[] bytes) throws YamlProblem {
-        if (bytes.length > limits.maxFileBytes()) {
-            throw new YamlProblem("the file is over the " + limits.maxFileBytes() + "-byte limit",
-                    "split the block into several programme files", Location.START);
-        }
-        return read(decode(bytes));
     }
 
     public LocatedDocument read(String text) throws YamlProblem {

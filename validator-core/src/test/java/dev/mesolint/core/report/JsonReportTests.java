@@ -56,7 +56,7 @@ class JsonReportTests {
     void carriesTheCautionAndTheFindingDetails() {
         RunReport run = ReportFixtures.handMadeRun(Severity.ERROR);
         String waivedPrint = run.files().get(0).waived().get(0).fingerprint();
-        JsonNode doc = json(ReportFixtures.input(run).withBaseline(Baseline.of(Set.of(waivedPrint))));
+        JsonNode doc = json(ReportFixtures.input(ReportFixtures.baselining(run, Set.of(waivedPrint))));
         assertEquals(List.of(), violations(doc));
         assertEquals(Mesolint.CAUTION, doc.get("caution").asString());
         assertTrue(doc.get("failed").asBoolean());

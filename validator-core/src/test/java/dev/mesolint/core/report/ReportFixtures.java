@@ -62,6 +62,15 @@ final class ReportFixtures {
      * A hand-built run over a loaded programme (the thirty-minute sample, with invented findings: an error, a warning,
      * an info finding and a waived warning) and a file that did not load (a schema error).
      */
+    /** {@code run} with the findings whose fingerprint is in {@code fingerprints} marked as held by a baseline. */
+    static RunReport baselining(RunReport run, java.util.Set<String> fingerprints) {
+        List<FileReport> files = run.files().stream().map(f -> new FileReport(f.displayPath(), f.programme(),
+                f.profile(), f.findings().stream()
+                        .map(x -> fingerprints.contains(x.fingerprint()) ? x.asBaselined() : x).toList(), f.metrics()))
+                .toList();
+        return new RunReport(files, run.failOn(), run.missing());
+    }
+
     static RunReport handMadeRun(Severity failOn) {
         String good = "programmes/a.yaml";
         var programme = check("sample-programs/programmes/minimal-30-minutes.yaml").files().get(0).programme();

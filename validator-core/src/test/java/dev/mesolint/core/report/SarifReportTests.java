@@ -122,7 +122,7 @@ class SarifReportTests {
         RunReport run = ReportFixtures.handMadeRun(Severity.ERROR);
         Finding error = run.files().get(0).findings().stream().filter(f -> f.ruleId().equals("week-sequence"))
                 .findFirst().orElseThrow();
-        JsonNode results = sarif(ReportFixtures.input(run).withBaseline(Baseline.of(Set.of(error.fingerprint()))))
+        JsonNode results = sarif(ReportFixtures.input(ReportFixtures.baselining(run, Set.of(error.fingerprint()))))
                 .at("/runs/0/results");
         assertEquals("unchanged", find(results, "week-sequence").get("baselineState").asString());
         assertEquals("new", find(results, "schema").get("baselineState").asString());
