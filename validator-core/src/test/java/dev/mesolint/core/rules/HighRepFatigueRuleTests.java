@@ -32,6 +32,7 @@ class HighRepFatigueRuleTests {
     @Test
     void compoundLiftsWarnAndIsolationLiftsInform() {
         List<Finding> findings = RuleRun.defaults().findings(dir, PROGRAMME, HighRepFatigueRule.ID);
+        // common practice: sets of 15+ reps to near failure cost more fatigue than they add, most on compound lifts
         assertEquals(List.of(Severity.WARNING, Severity.INFO), findings.stream().map(Finding::severity).toList());
         assertTrue(findings.get(0).message().contains("20 reps at RIR 1 is a 21-rep effort"),
                 findings.get(0).message());

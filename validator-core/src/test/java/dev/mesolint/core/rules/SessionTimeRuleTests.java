@@ -34,6 +34,8 @@ class SessionTimeRuleTests {
     @Test
     void theProgrammesBudgetDecides() {
         List<Finding> over = run(RuleRun.defaults(), "25");
+        // the estimate uses docs/model.md's defaults: about 4 s a rep (common practice), the written rests,
+        // 1.5 min per warm-up set and 1 min changeover per exercise (project conventions)
         assertEquals(1, over.size(), over.toString());
         assertTrue(over.get(0).message().startsWith("week 1 day 1: about 28 min estimated"), over.get(0).message());
         assertTrue(over.get(0).message().endsWith("over the programme's session-minutes: 25"));

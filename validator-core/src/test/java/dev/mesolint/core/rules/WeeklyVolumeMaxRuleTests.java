@@ -56,6 +56,8 @@ class WeeklyVolumeMaxRuleTests {
 
     @Test
     void theHypertrophyLimitIsTwentyForEveryMuscle() {
+        // common practice, drawn from the weekly-set dose-response data (Schoenfeld, Ogborn & Krieger 2017,
+        // J Sports Sci 35(11):1073-1082; Pelland et al. 2024): returns diminish well before 20 hard sets a week
         assertEquals(List.of("chest", "lats"), muscles(RuleRun.defaults()));
     }
 
