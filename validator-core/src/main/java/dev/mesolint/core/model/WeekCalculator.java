@@ -31,7 +31,8 @@ final class WeekCalculator {
     WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
         List<SessionMetrics> computed = week.sessions().stream()
                 .sorted(Comparator.comparingInt(Session::day))
-                .map(s -> sessions.compute(s, catalogue, athlete, units))
+                // each session sees the 1RMs in force for it (stated per week, or unknown after a test)
+                .map(s -> sessions.compute(s, catalogue, athlete.atSession(week.number(), s.day()), units))
                 .toList();
         Set<Muscle> trained = EnumSet.noneOf(Muscle.class);
         computed.forEach(s -> trained.addAll(s.muscles().keySet()));
