@@ -127,6 +127,8 @@ final class CheckCommand implements Callable<Integer> {
             request = workspace.request(piped.isPresent() ? List.of() : paths);
             Checker checker = new Checker(request, installed.rules());
             report = piped.map(d -> checker.run(d.path(), d.content())).orElseGet(checker::run);
+            checker.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
+                    + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }
