@@ -11,6 +11,7 @@ import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import dev.mesolint.core.rules.InternalErrorRule;
@@ -76,9 +77,14 @@ final class CheckCommand implements Callable<Integer> {
     boolean showWaived;
 
     @Option(names = "--report", paramLabel = "FORMAT=PATH", converter = ReportTargetConverter.class,
-            description = {"Also write a report (repeatable). FORMAT is one of: console, json, sarif, junit, html.",
+            description = {"Also write a report (repeatable). FORMAT is one of: console, json, sarif, junit, html, "
+                    + "html-sheet (the athlete's sheet: the prescription with loads, a week per printed page).",
                 "e.g. --report sarif=target/mesolint.sarif --report html=target/mesolint.html"})
     List<ReportTarget> reports = new ArrayList<>();
+
+    @Option(names = "--no-reasons", description = "Leave the reasons of the athlete's constraints (health data) out "
+            + "of the HTML report, e.g. for a report that will be shared.")
+    boolean noReasons;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -95,13 +101,15 @@ final class CheckCommand implements Callable<Integer> {
         Workspace workspace;
         CheckRequest request;
         InstalledRules installed;
+        Checker checker;
         long started = System.nanoTime();
         try {
             installed = Installed.rules();
             workspace = Workspace.open(options.toRunOptions(catalogues.files, level, Optional.ofNullable(baseline)),
                     installed.rules());
             request = workspace.request(paths);
-            report = new Checker(request, installed.rules()).run();
+            checker = new Checker(request, installed.rules());
+            report = checker.run();
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }
@@ -110,7 +118,9 @@ final class CheckCommand implements Callable<Integer> {
         }
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
-        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed);
+        ReportOptions reportOptions = ReportOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
+                .withReasons(!noReasons).withCatalogue(checker.catalogue());
+        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed, reportOptions);
         for (ReportTarget target : reports) {
             try {
                 ReportFiles.write(input, target);

@@ -18,9 +18,10 @@ import java.util.Objects;
  * @param rules   every registered rule, in reference order (SARIF lists them all; JUnit has a case per rule run)
  * @param root    the folder that findings' paths are relative to
  * @param elapsed how long the run took; {@link Duration#ZERO} when not measured
+ * @param options how the coach's report is written (plate increment, reasons, catalogue, extra sections)
  */
 public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
-        ReportFigures figures, Duration elapsed) {
+        ReportFigures figures, Duration elapsed, ReportOptions options) {
 
     public ReportInput {
         Objects.requireNonNull(run, "run");
@@ -29,23 +30,29 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
         root = root.toAbsolutePath().normalize();
         Objects.requireNonNull(figures, "figures");
         Objects.requireNonNull(elapsed, "elapsed");
+        Objects.requireNonNull(options, "options");
     }
 
     /** Default configuration, no figures, duration not measured. */
     public static ReportInput of(RunReport run, List<RuleDefinition> rules, Path root) {
-        return new ReportInput(run, rules, RuleConfiguration.DEFAULTS, root, ReportFigures.NONE, Duration.ZERO);
+        return new ReportInput(run, rules, RuleConfiguration.DEFAULTS, root, ReportFigures.NONE, Duration.ZERO,
+                ReportOptions.DEFAULTS);
     }
 
     public ReportInput withConfiguration(RuleConfiguration newConfiguration) {
-        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed);
+        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed, options);
     }
 
     public ReportInput withFigures(ReportFigures newFigures) {
-        return new ReportInput(run, rules, configuration, root, newFigures, elapsed);
+        return new ReportInput(run, rules, configuration, root, newFigures, elapsed, options);
     }
 
     public ReportInput withElapsed(Duration newElapsed) {
-        return new ReportInput(run, rules, configuration, root, figures, newElapsed);
+        return new ReportInput(run, rules, configuration, root, figures, newElapsed, options);
+    }
+
+    public ReportInput withOptions(ReportOptions newOptions) {
+        return new ReportInput(run, rules, configuration, root, figures, elapsed, newOptions);
     }
 
     /** The rules that run on a file checked under {@code profile}: the registered rules that are not off there. */

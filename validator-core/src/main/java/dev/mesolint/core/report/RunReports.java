@@ -19,9 +19,15 @@ public final class RunReports {
     /** The input for every report of {@code run}, checked under {@code request}'s configuration. */
     public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
             Duration elapsed) {
+        return input(run, rules, request, elapsed, ReportOptions.DEFAULTS);
+    }
+
+    /** The same, with the coach's report options (plate increment, reasons, catalogue, extra sections). */
+    public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
+            Duration elapsed, ReportOptions options) {
         return ReportInput.of(run, rules, request.root()).withConfiguration(request.configuration())
                 .withFigures(ModelFigures.underProfiles(request.configuration(), rules))
-                .withElapsed(elapsed);
+                .withElapsed(elapsed).withOptions(options);
     }
 
     /** The file a format is written to in an output folder: {@code mesolint.html}, {@code TEST-mesolint.xml}, ... */
@@ -32,6 +38,7 @@ public final class RunReports {
             case SARIF -> "mesolint.sarif";
             case JUNIT -> "TEST-mesolint.xml";
             case HTML -> "mesolint.html";
+            case HTML_SHEET -> "mesolint-sheet.html";
         };
         return new ReportTarget(format, folder.resolve(name));
     }
@@ -41,7 +48,7 @@ public final class RunReports {
      * every programme loaded, so results reused from a cache, which keeps findings only, cannot feed them.
      */
     public static boolean needsFigures(ReportFormat format) {
-        return format == ReportFormat.HTML || format == ReportFormat.JSON;
+        return format == ReportFormat.HTML || format == ReportFormat.HTML_SHEET || format == ReportFormat.JSON;
     }
 
     /** Writes {@code input} to every target. */
