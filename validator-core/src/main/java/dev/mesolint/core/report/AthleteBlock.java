@@ -36,7 +36,7 @@ final class AthleteBlock {
                     .append("</th><th scope=\"col\">1RM</th></tr></thead><tbody>\n");
             athlete.oneRepMax().entrySet().stream().sorted(Map.Entry.comparingByKey()).forEach(e -> page
                     .append("<tr><th scope=\"row\">").append(Html.esc(loads.name(e.getKey()))).append("</th><td>")
-                    .append(Html.esc(weight(e.getValue()))).append("</td></tr>\n"));
+                    .append(Html.esc(maxes(athlete, e.getKey(), e.getValue()))).append("</td></tr>\n"));
             page.append("</tbody></table>\n");
         }
         if (!athlete.constraints().isEmpty()) {
@@ -98,6 +98,22 @@ final class AthleteBlock {
             }
         }
         return out;
+    }
+
+    /** {@code 140 kg}, or every value in block order: {@code 140 kg; from week 4: 145 kg; tested week 6 day 1}. */
+    private static String maxes(Athlete athlete, String exerciseId, Load.Absolute first) {
+        List<dev.mesolint.core.programme.OneRepMaxStep> steps = athlete.steps(exerciseId);
+        if (steps.isEmpty()) {
+            return weight(first);
+        }
+        List<String> parts = new ArrayList<>();
+        for (var step : steps) {
+            String when = step.week() == 1 && step.day() <= 1 && !step.tested() ? "" : "from week " + step.week()
+                    + (step.day() > 1 ? " day " + step.day() : "") + ": ";
+            parts.add(step.tested() ? "tested (week " + step.week() + "), unknown until restated"
+                    : when + step.value().map(AthleteBlock::weight).orElse("unknown"));
+        }
+        return String.join("; ", parts);
     }
 
     private static String weight(Load.Absolute max) {

@@ -37,12 +37,12 @@ final class PrescriptionRows {
     private PrescriptionRows() {
     }
 
-    static List<Row> of(Session session, SetLoads loads) {
+    static List<Row> of(int week, Session session, SetLoads loads) {
         List<Row> rows = new ArrayList<>();
         char letter = 'A';
         for (WorkItem item : session.work()) {
             if (item instanceof ExerciseWork work) {
-                exercise(rows, null, "", work, loads, work.warmUpSets());
+                exercise(rows, null, "", work, loads, new int[] {week, session.day()});
             } else if (item instanceof Superset superset) {
                 String rest = superset.rest().map(d -> ", " + Durations.format(d) + " rest after each round").orElse("");
                 Heading heading = new Heading(String.valueOf(letter), "Superset " + letter + ": " + superset.rounds()
@@ -50,7 +50,8 @@ final class PrescriptionRows {
                         superset.location().pointer());
                 int n = 1;
                 for (ExerciseWork work : superset.items()) {
-                    exercise(rows, heading, letter + Integer.toString(n++), work, loads, work.warmUpSets());
+                    exercise(rows, heading, letter + Integer.toString(n++), work, loads,
+                            new int[] {week, session.day()});
                 }
                 letter = letter == 'Z' ? 'A' : (char) (letter + 1);
             }
@@ -58,8 +59,10 @@ final class PrescriptionRows {
         return rows;
     }
 
+    /** @param when the week and day of the session, for the 1RM in force */
     private static void exercise(List<Row> rows, Heading heading, String label, ExerciseWork work, SetLoads loads,
-            int warmUps) {
+            int[] when) {
+        int warmUps = work.warmUpSets();
         List<SetPrescription> sets = work.sets();
         int start = 0;
         boolean first = true;
@@ -69,9 +72,9 @@ final class PrescriptionRows {
                 end++;
             }
             SetPrescription set = sets.get(start);
-            String notes = notes(set, first ? warmUps : 0);
+            String notes = notes(work, set, first ? warmUps : 0);
             rows.add(new Row(first ? heading : null, label, work.exerciseId(), loads.name(work.exerciseId()),
-                    (end - start) + " × " + reps(set), effort(set), loads.of(work.exerciseId(), set),
+                    (end - start) + " × " + reps(set), effort(set), loads.of(work.exerciseId(), set, when[0], when[1]),
                     set.rest().map(Durations::format).orElse(""), set.tempo().map(Object::toString).orElse(""), notes,
                     set.location().line(), work.location().pointer()));
             first = false;
@@ -83,10 +86,23 @@ final class PrescriptionRows {
     private static boolean same(SetPrescription a, SetPrescription b) {
         return a.reps().equals(b.reps()) && a.rir().equals(b.rir()) && a.rpe().equals(b.rpe())
                 && a.load().equals(b.load()) && a.rest().equals(b.rest()) && a.tempo().equals(b.tempo())
-                && Objects.equals(a.technique(), b.technique());
+                && Objects.equals(a.technique(), b.technique()) && a.hold().equals(b.hold())
+                && a.distance().equals(b.distance()) && a.test() == b.test();
     }
 
     private static String reps(SetPrescription set) {
+        if (set.hold().isPresent()) {
+            return "hold " + Durations.format(set.hold().get());
+        }
+        if (set.distance().isPresent()) {
+            return set.distance().get().toString();
+        }
+        if (set.test()) {
+            return "1RM test";
+        }
+        if (set.reps().hasFloor()) {
+            return set.reps().min() + "+ (then AMRAP)";
+        }
         return set.reps().amrap() ? "AMRAP" : set.reps().toString();
     }
 
@@ -97,8 +113,9 @@ final class PrescriptionRows {
         return String.join(" · ", parts);
     }
 
-    private static String notes(SetPrescription set, int warmUps) {
+    private static String notes(ExerciseWork work, SetPrescription set, int warmUps) {
         List<String> parts = new ArrayList<>();
+        work.role().ifPresent(r -> parts.add(r.yamlName() + " lift"));
         if (warmUps > 0) {
             parts.add(warmUps + (warmUps == 1 ? " warm-up set first" : " warm-up sets first"));
         }

@@ -76,7 +76,7 @@ final class PrescriptionView {
             Optional<Session> before = previous == null || i >= previous.sessions().size() ? Optional.empty()
                     : Optional.of(previous.sessions().get(i)).filter(s -> s.day() == session.day());
             StringBuilder table = new StringBuilder();
-            changes += session(table, week, session, before.map(s -> PrescriptionRows.of(s, loads)).orElse(null));
+            changes += session(table, week, session, before.map(s -> PrescriptionRows.of(previous.number(), s, loads)).orElse(null));
             tables.add(table.toString());
         }
         if (previous != null) {
@@ -102,7 +102,7 @@ final class PrescriptionView {
      * coach's report a session that repeats the week before shows only its changed rows and rows with findings.
      */
     private int session(StringBuilder page, Week week, Session session, List<PrescriptionRows.Row> before) {
-        List<PrescriptionRows.Row> rows = PrescriptionRows.of(session, loads);
+        List<PrescriptionRows.Row> rows = PrescriptionRows.of(week.number(), session, loads);
         boolean onlyChanges = mode == Mode.REPORT && before != null;
         List<boolean[]> changed = new ArrayList<>();
         List<Boolean> shown = new ArrayList<>();

@@ -40,20 +40,22 @@ final class SetLoads {
         return plates;
     }
 
-    /** The set's load; empty when the set states none. */
-    Optional<Worked> of(String exerciseId, SetPrescription set) {
+    /** The set's load in a session of week {@code week}, day {@code day}; empty when the set states none. */
+    Optional<Worked> of(String exerciseId, SetPrescription set, int week, int day) {
         if (set.load().isEmpty()) {
             return Optional.empty();
         }
         LoadUnit units = programme.info().units();
-        Optional<Load.Absolute> max = programme.athlete().oneRepMax(exerciseId);
+        // The 1RM in force for this session: a later week may state a new one, and after a test it is unknown.
+        Optional<Load.Absolute> max = programme.athlete().oneRepMax(exerciseId, week, day);
         if (set.load().get() instanceof Load.Absolute weight) {
             String share = max.map(m -> percent(weight.in(m.unit()) / m.amount()) + " of 1RM").orElse("as written");
             return Optional.of(new Worked(Html.weight(weight.amount()) + " " + weight.unit().symbol(), share, null));
         }
         double share = ((Load.Relative) set.load().get()).fraction();
         if (max.isEmpty()) {
-            return Optional.of(new Worked(percent(share) + " 1RM", "no 1RM given for this exercise", null));
+            return Optional.of(new Worked(percent(share) + " 1RM", programme.athlete().steps(exerciseId).isEmpty()
+                    ? "no 1RM given for this exercise" : "1RM not known here: set by the test before", null));
         }
         double oneRm = max.get().in(units);
         Optional<AthleteConstraint> cap = capFor(exerciseId);
