@@ -11,7 +11,7 @@ import java.util.Map;
 
 /**
  * The athlete a programme is written for: known 1RMs, and each constraint with its reason and the findings it
- * caused. Reasons are health data: a report meant to be shared leaves them out ({@link ReportOptions#showReasons()}).
+ * caused. Reasons are health data: a report meant to be shared leaves them out ({@link HtmlOptions#showReasons()}).
  */
 final class AthleteBlock {
     static final String REASON_LEFT_OUT = "(reason left out of this report)";

@@ -67,7 +67,7 @@ final class FindingsView {
 
     /** The text as shown: constraint reasons replaced when the report leaves them out. */
     private String text(String text) {
-        return input.options().showReasons() || file.programme().isEmpty() ? text
+        return input.html().showReasons() || file.programme().isEmpty() ? text
                 : AthleteBlock.withoutReasons(text, file.programme().get());
     }
 }

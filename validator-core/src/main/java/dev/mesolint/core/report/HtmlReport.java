@@ -64,7 +64,7 @@ public final class HtmlReport implements ReportWriter {
         if (!input.elapsed().isZero()) {
             page.append(HtmlPage.fact("Run time", JunitReport.seconds(input.elapsed()) + " s"));
         }
-        if (!input.options().showReasons()) {
+        if (!input.html().showReasons()) {
             page.append(HtmlPage.fact("Constraint reasons", "left out"));
         }
         page.append("</dl>\n");
@@ -90,10 +90,10 @@ public final class HtmlReport implements ReportWriter {
         Optional<Programme> programme = file.programme();
         if (programme.isPresent()) {
             Programme p = programme.get();
-            PlateRounding plates = PlateRounding.of(p.info().plateIncrement(), input.options().plateIncrement(),
+            PlateRounding plates = PlateRounding.of(p.info().plateIncrement(), input.html().plateIncrement(),
                     p.info().units());
-            SetLoads loads = new SetLoads(p, plates, input.options().catalogue());
-            AthleteBlock.render(page, p, loads, findings, input.options().showReasons(), id);
+            SetLoads loads = new SetLoads(p, plates, input.html().catalogue());
+            AthleteBlock.render(page, p, loads, findings, input.html().showReasons(), id);
             page.append("<section class=\"plan\" aria-labelledby=\"").append(id).append("-plan\">\n<h3 id=\"")
                     .append(id).append("-plan\">Prescription</h3>\n<p class=\"note\">")
                     .append(Html.esc(PrescriptionView.roundingRule(plates, stepSource(p, input)))).append("</p>\n");
@@ -112,7 +112,7 @@ public final class HtmlReport implements ReportWriter {
                     + "computed. Fix the findings below first.</p>\n");
         }
         new FindingsView(input, file, findings, links).render(page, id);
-        for (ProgrammeSection section : input.options().sections()) {
+        for (ProgrammeSection section : input.html().sections()) {
             section.render(input, file, id, page);
         }
         page.append("</details>\n</section>\n");
@@ -127,7 +127,7 @@ public final class HtmlReport implements ReportWriter {
         if (p.info().plateIncrement().isPresent()) {
             return "the programme's plate-increment";
         }
-        return input.options().plateIncrement().isPresent() ? "the repository's plate-increment"
+        return input.html().plateIncrement().isPresent() ? "the repository's plate-increment"
                 : "the default; set plate-increment in the programme or the repository configuration";
     }
 

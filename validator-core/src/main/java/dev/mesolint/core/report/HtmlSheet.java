@@ -39,9 +39,9 @@ public final class HtmlSheet implements ReportWriter {
     }
 
     private static void programme(StringBuilder page, ReportInput input, Programme p, String id, boolean first) {
-        PlateRounding plates = PlateRounding.of(p.info().plateIncrement(), input.options().plateIncrement(),
+        PlateRounding plates = PlateRounding.of(p.info().plateIncrement(), input.html().plateIncrement(),
                 p.info().units());
-        SetLoads loads = new SetLoads(p, plates, input.options().catalogue());
+        SetLoads loads = new SetLoads(p, plates, input.html().catalogue());
         String title = p.info().title() != null && !p.info().title().isBlank() ? p.info().title() : p.info().id();
         page.append("<section class=\"programme").append(first ? " first" : "").append("\" id=\"").append(id)
                 .append("\" aria-labelledby=\"").append(id).append("-h\">\n<header class=\"sheet-head\">\n<h1 id=\"")
@@ -49,7 +49,7 @@ public final class HtmlSheet implements ReportWriter {
         HtmlPage.caution(page, "caution-top");
         page.append("<p class=\"note\">Written by mesolint ").append(Html.esc(dev.mesolint.core.Mesolint.version()))
                 .append(" from ").append(Html.esc(p.info().id())).append(". ").append(Html.esc(PrescriptionView.roundingRule(plates,
-                p.info().plateIncrement().isPresent() || input.options().plateIncrement().isPresent()
+                p.info().plateIncrement().isPresent() || input.html().plateIncrement().isPresent()
                         ? "as the programme's coach set it" : "the default"))).append("</p>\n</header>\n");
         new PrescriptionView(p, loads, PrescriptionView.Mode.SHEET, null, null, null).render(page, id);
         page.append("</section>\n");

@@ -19,15 +19,9 @@ public final class RunReports {
     /** The input for every report of {@code run}, checked under {@code request}'s configuration. */
     public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
             Duration elapsed) {
-        return input(run, rules, request, elapsed, ReportOptions.DEFAULTS);
-    }
-
-    /** The same, with the coach's report options (plate increment, reasons, catalogue, extra sections). */
-    public static ReportInput input(RunReport run, List<RuleDefinition> rules, CheckRequest request,
-            Duration elapsed, ReportOptions options) {
         return ReportInput.of(run, rules, request.root()).withConfiguration(request.configuration())
                 .withFigures(ModelFigures.underProfiles(request.configuration(), rules))
-                .withElapsed(elapsed).withOptions(options);
+                .withElapsed(elapsed);
     }
 
     /** The file a format is written to in an output folder: {@code mesolint.html}, {@code TEST-mesolint.xml}, ... */

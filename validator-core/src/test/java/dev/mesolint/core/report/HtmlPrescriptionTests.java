@@ -128,7 +128,7 @@ class HtmlPrescriptionTests {
     void reasonsCanBeLeftOutOfAReportThatWillBeShared() {
         var run = ReportFixtures.check("sample-programs/broken/constraint-load.yaml");
         String html = ReportFixtures.render(ReportFormat.HTML, ReportFixtures.input(run)
-                .withOptions(ReportOptions.DEFAULTS.withReasons(false)));
+                .withHtml(HtmlOptions.DEFAULTS.withReasons(false)));
         assertFalse(html.contains("Returning from a shoulder problem"), "neither in the athlete block nor in messages");
         assertTrue(html.contains(AthleteBlock.REASON_LEFT_OUT));
         assertTrue(html.contains("constraint-load"), "the finding itself stays");

@@ -44,7 +44,7 @@ final class ReportFixtures {
 
     /** The input of a real run with the catalogue the coach's report names exercises and finds caps with. */
     static ReportInput withCatalogue(RunReport run) {
-        return input(run).withOptions(ReportOptions.DEFAULTS.withCatalogue(catalogue()));
+        return input(run).withHtml(HtmlOptions.DEFAULTS.withCatalogue(catalogue()));
     }
 
     static ReportInput input(RunReport run) {
