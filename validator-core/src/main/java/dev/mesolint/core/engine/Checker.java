@@ -3,6 +3,7 @@ package dev.mesolint.core.engine;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.CatalogueFile;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.format.CatalogueReader;
 import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.format.ProgrammeBinder;
@@ -76,7 +77,14 @@ public final class Checker {
         List<Path> files = ProgrammeFiles.discover(request.inputs(), missing);
         List<FileReport> reports = new ArrayList<>(catalogueReports);
         reports.addAll(files.parallelStream().map(this::checkFile).toList());
-        return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
+        return new RunReport(DuplicateProgrammeIds.mark(reports, duplicateSeverity()), request.failOn(),
+                missing.stream().map(Path::toString).toList());
+    }
+
+    /** The severity of {@link DuplicateProgrammeIds} findings (fixed: see its rule). */
+    public Severity duplicateSeverity() {
+        return rules.stream().filter(r -> r.id().equals(DuplicateProgrammeIds.ID)).findFirst()
+                .map(r -> r.metadata().defaultSeverity()).orElse(Severity.ERROR);
     }
 
     /** Checks one programme file; any failure becomes a finding on that file, never an exception. */
@@ -135,7 +143,9 @@ public final class Checker {
                 request.configuration().modelParameters(profile));
         FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
         new RuleRunner(rules, request.configuration()).run(scope);
-        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics));
+        ProgrammeIdentity identity = new ProgrammeIdentity(programme.info().id(), document.valueAt("/programme/id"));
+        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics),
+                Optional.of(identity));
     }
 
     private FileReport violationReport(String shown, Programme programme, String ruleId, List<Violation> violations) {

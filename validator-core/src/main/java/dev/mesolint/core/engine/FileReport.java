@@ -15,9 +15,11 @@ import java.util.Optional;
  * @param programme   present when the file loaded (even if rules then found problems)
  * @param profile     the rule profile the file was checked under
  * @param metrics     the training-model figures, present when the programme loaded
+ * @param identity    the programme's id and where it is written, present when the programme loaded (also when the
+ *                    findings come from a cache that does not keep the programme)
  */
 public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
-        Optional<ProgrammeMetrics> metrics) {
+        Optional<ProgrammeMetrics> metrics, Optional<ProgrammeIdentity> identity) {
 
     private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
             .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)
@@ -25,6 +27,18 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
 
     public FileReport {
         findings = findings.stream().sorted(ORDER).toList();
+    }
+
+    /** A report whose programme's id is taken from the programme, located at its header. */
+    public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
+            Optional<ProgrammeMetrics> metrics) {
+        this(displayPath, programme, profile, findings, metrics,
+                programme.map(p -> new ProgrammeIdentity(p.info().id(), p.info().location())));
+    }
+
+    /** This report with other findings, all else the same. */
+    public FileReport withFindings(List<Finding> other) {
+        return new FileReport(displayPath, programme, profile, other, metrics, identity);
     }
 
     /** A report without training-model figures (the file did not load, or figures were not asked for). */

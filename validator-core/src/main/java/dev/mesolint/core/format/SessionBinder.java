@@ -7,6 +7,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Technique;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.Durations;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.RepTarget;
@@ -15,12 +16,18 @@ import dev.mesolint.core.value.Rpe;
 import dev.mesolint.core.value.Tempo;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import tools.jackson.databind.JsonNode;
 
 /** Reads sessions, their work items and sets (schema-valid input). */
 final class SessionBinder {
+    /** The keys a set takes from its entry unless it writes them itself; their places go with the values. */
+    private static final List<String> SET_KEYS = List.of("reps", "rir", "rpe", "load", "rest", "tempo", "technique");
+    private static final List<String> EFFORT_KEYS = List.of("rir", "rpe", "load");
+
     private final BindContext ctx;
 
     SessionBinder(BindContext ctx) {
@@ -102,38 +109,53 @@ final class SessionBinder {
     }
 
     private SetDefaults defaults(JsonNode node, String pointer) {
+        Map<String, Location> written = new HashMap<>();
+        for (String key : SET_KEYS) {
+            if (node.has(key)) {
+                written.put(key, ctx.at(Pointers.child(pointer, key)));
+            }
+        }
         return new SetDefaults(ctx.value(node, pointer, "reps", RepTarget::parse),
                 ctx.value(node, pointer, "rir", RirRange::parse), ctx.value(node, pointer, "rpe", Rpe::parse),
                 ctx.value(node, pointer, "load", Load::parse), ctx.value(node, pointer, "rest", Durations::parse),
                 ctx.value(node, pointer, "tempo", Tempo::parse),
                 Optional.ofNullable(BindContext.text(node, "technique"))
-                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)));
+                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)), written);
     }
 
     /** Values written on an exercise entry that its sets inherit unless a set overrides them. */
     private record SetDefaults(Optional<RepTarget> reps, Optional<RirRange> rir, Optional<Rpe> rpe, Optional<Load> load,
-            Optional<java.time.Duration> rest, Optional<Tempo> tempo, Optional<Technique> technique) {
+            Optional<java.time.Duration> rest, Optional<Tempo> tempo, Optional<Technique> technique,
+            Map<String, Location> written) {
 
         SetDefaults override(SetDefaults set) {
             // An effort stated on the set replaces every effort form of the entry, so that the two never mix.
             boolean setStatesEffort = set.rir.isPresent() || set.rpe.isPresent() || set.load.isPresent();
+            Map<String, Location> places = new HashMap<>(written);
+            if (setStatesEffort) {
+                EFFORT_KEYS.forEach(places::remove);
+            }
+            places.putAll(set.written);
             return new SetDefaults(set.reps.or(() -> reps),
                     setStatesEffort ? set.rir : rir, setStatesEffort ? set.rpe : rpe,
                     setStatesEffort ? set.load : load, set.rest.or(() -> rest),
-                    set.tempo.or(() -> tempo), set.technique.or(() -> technique));
+                    set.tempo.or(() -> tempo), set.technique.or(() -> technique), places);
         }
 
         SetDefaults withoutTechnique() {
-            return new SetDefaults(reps, rir, rpe, load, rest, tempo, Optional.empty());
+            Map<String, Location> places = new HashMap<>(written);
+            places.remove("technique");
+            return new SetDefaults(reps, rir, rpe, load, rest, tempo, Optional.empty(), places);
         }
 
-        SetPrescription toSet(int number, dev.mesolint.core.source.Location location, List<Waiver> waivers,
+        SetPrescription toSet(int number, Location location, List<Waiver> waivers,
                 BindContext ctx, String pointer) {
             RepTarget repTarget = reps.orElseGet(() -> {
                 ctx.reject(pointer, "the set has no reps", "add reps: 8, a range such as reps: 8-12, or reps: amrap");
                 return RepTarget.exactly(1);
             });
-            return new SetPrescription(number, repTarget, rir, rpe, load, rest, tempo, technique, location, waivers);
+            return new SetPrescription(number, repTarget, rir, rpe, load, rest, tempo, technique, location, waivers,
+                    written);
         }
     }
 }

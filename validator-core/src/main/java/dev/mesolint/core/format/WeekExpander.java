@@ -7,6 +7,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.source.Location;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -86,7 +87,7 @@ final class WeekExpander {
             SetPrescription p = sets.get(i);
             out.add(new SetPrescription(i + 1, applies ? a.reps(p.reps()) : p.reps(), applies ? a.rir(p.rir()) : p.rir(),
                     applies ? a.rpe(p.rpe()) : p.rpe(), applies ? a.load(p.load()) : p.load(), p.rest(), p.tempo(),
-                    p.technique(), p.location(), plus(p.waivers(), weekWaivers)));
+                    p.technique(), p.location(), plus(p.waivers(), weekWaivers), p.written()));
         }
         return new ExerciseWork(e.exerciseId(), e.warmUpSets(), out, e.location(), e.exerciseLocation(),
                 plus(e.waivers(), weekWaivers));
@@ -96,8 +97,10 @@ final class WeekExpander {
     private static void resize(List<SetPrescription> sets, int delta) {
         for (int i = 0; i < delta; i++) {
             SetPrescription last = sets.get(sets.size() - 1);
+            Map<String, Location> written = new HashMap<>(last.written());
+            written.remove("technique");
             SetPrescription plain = new SetPrescription(last.number(), last.reps(), last.rir(), last.rpe(), last.load(),
-                    last.rest(), last.tempo(), Optional.empty(), last.location(), last.waivers());
+                    last.rest(), last.tempo(), Optional.empty(), last.location(), last.waivers(), written);
             sets.add(last.technique().isPresent() ? sets.size() - 1 : sets.size(), plain);
         }
         for (int i = 0; i > delta && sets.size() > 1; i--) {

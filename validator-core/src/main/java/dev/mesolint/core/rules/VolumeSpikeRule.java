@@ -1,8 +1,11 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -65,7 +68,8 @@ public final class VolumeSpikeRule implements Rule {
                         + "); the " + context.profileName() + " profile flags weeks over " + context.shown(MAX_RATIO)
                         + " x that mean",
                         "raise " + muscle + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
-                                + " hard sets this week");
+                                + " hard sets this week",
+                        Facts.about(Subject.muscle(muscle)).measured(ratio, maxRatio, "ratio"));
             }
         }
     }
