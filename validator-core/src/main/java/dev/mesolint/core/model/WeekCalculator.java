@@ -20,16 +20,19 @@ final class WeekCalculator {
 
     private final ModelParameters params;
     private final SessionCalculator sessions;
+    private final StrengthFigures strength;
 
     WeekCalculator(ModelParameters params) {
         this.params = params;
         this.sessions = new SessionCalculator(params);
+        this.strength = new StrengthFigures(params);
     }
 
     WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
         List<SessionMetrics> computed = week.sessions().stream()
                 .sorted(Comparator.comparingInt(Session::day))
-                .map(s -> sessions.compute(s, catalogue, athlete, units))
+                // each session sees the 1RMs in force for it (stated per week, or unknown after a test)
+                .map(s -> sessions.compute(s, catalogue, athlete.atSession(week.number(), s.day()), units))
                 .toList();
         Set<Muscle> trained = EnumSet.noneOf(Muscle.class);
         computed.forEach(s -> trained.addAll(s.muscles().keySet()));
@@ -39,7 +42,7 @@ final class WeekCalculator {
         }
         double volumeLoad = computed.stream().mapToDouble(SessionMetrics::volumeLoad).sum();
         return new WeekMetrics(week.number(), week.deload(), week.location(), muscles, computed, volumeLoad, Map.of(),
-                Map.of());
+                Map.of(), strength.perWeek(week.number(), computed));
     }
 
     private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {

@@ -139,8 +139,8 @@ class RuleMessagesTests {
     @Test
     void noDeload() {
         assertEquals("info weeks 1-8: 8 weeks in a row without a deload week, more than the 6 the hypertrophy "
-                + "profile allows for an intermediate lifter (fix: make week 7 (or an earlier one) a deload: "
-                + "deload: true, with fewer sets or more reps in reserve)", text(found("no-deload/failing.yaml",
+                + "profile allows for an intermediate lifter (fix: add deload: true to week 7 (or an earlier "
+                + "one), with fewer sets or more reps in reserve in it)", text(found("no-deload/failing.yaml",
                 NoDeloadRule.ID).get(0)));
     }
 }
