@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
@@ -101,7 +102,7 @@ final class CheckCommand implements Callable<Integer> {
             workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, level, Optional.ofNullable(baseline)),
                     installed.rules());
             request = workspace.request(paths);
-            report = new Checker(request, installed.rules()).run();
+            report = DuplicateProgrammeIds.mark(new Checker(request, installed.rules()).run());
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }

@@ -3,7 +3,6 @@ package dev.mesolint.core.engine;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.CatalogueFile;
 import dev.mesolint.core.finding.Finding;
-import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.format.CatalogueReader;
 import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.format.ProgrammeBinder;
@@ -77,14 +76,7 @@ public final class Checker {
         List<Path> files = ProgrammeFiles.discover(request.inputs(), missing);
         List<FileReport> reports = new ArrayList<>(catalogueReports);
         reports.addAll(files.parallelStream().map(this::checkFile).toList());
-        return new RunReport(DuplicateProgrammeIds.mark(reports, duplicateSeverity()), request.failOn(),
-                missing.stream().map(Path::toString).toList());
-    }
-
-    /** The severity of {@link DuplicateProgrammeIds} findings (fixed: see its rule). */
-    public Severity duplicateSeverity() {
-        return rules.stream().filter(r -> r.id().equals(DuplicateProgrammeIds.ID)).findFirst()
-                .map(r -> r.metadata().defaultSeverity()).orElse(Severity.ERROR);
+        return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
     }
 
     /** Checks one programme file; any failure becomes a finding on that file, never an exception. */

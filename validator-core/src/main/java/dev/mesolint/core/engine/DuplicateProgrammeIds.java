@@ -21,6 +21,11 @@ public final class DuplicateProgrammeIds {
     private DuplicateProgrammeIds() {
     }
 
+    /** {@code run} with the shared ids marked: what a check of a repository reports. */
+    public static RunReport mark(RunReport run) {
+        return new RunReport(mark(run.files(), Severity.ERROR), run.failOn(), run.missing(), run.baselineApplied());
+    }
+
     /** {@code reports} with a finding added to each file whose programme id another file also has. */
     public static List<FileReport> mark(List<FileReport> reports, Severity severity) {
         Map<String, List<String>> filesById = new LinkedHashMap<>();

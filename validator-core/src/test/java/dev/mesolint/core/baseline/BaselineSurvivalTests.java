@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.ProfileConfiguration;
 import dev.mesolint.core.engine.RunReport;
@@ -254,7 +255,7 @@ class BaselineSurvivalTests {
     void twoProgrammesWithOneIdAreALocatedError() {
         Path a = TempFiles.write(root, "a.yaml", ORIGINAL);
         Path b = TempFiles.write(root, "b.yaml", "# a copy\n" + ORIGINAL);
-        RunReport run = check(a, b);
+        RunReport run = DuplicateProgrammeIds.mark(check(a, b));
         List<Finding> shared = run.active().stream().filter(f -> f.ruleId().equals("duplicate-programme-id"))
                 .toList();
         assertEquals(List.of("a.yaml:3:7", "b.yaml:4:7"), shared.stream()
