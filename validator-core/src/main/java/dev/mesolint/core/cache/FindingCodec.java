@@ -1,6 +1,7 @@
 package dev.mesolint.core.cache;
 
 import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.FileTiming;
 import dev.mesolint.core.engine.ProgrammeIdentity;
 import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.finding.Edit;
@@ -49,7 +50,7 @@ final class FindingCodec {
         Optional<ProgrammeIdentity> id = identity == null || identity.isNull() ? Optional.empty()
                 : Optional.of(new ProgrammeIdentity(text(identity, "id"), location(identity)));
         return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings, Optional.empty(),
-                id);
+                FileTiming.NONE, id);
     }
 
     private static ObjectNode finding(Finding f) {
