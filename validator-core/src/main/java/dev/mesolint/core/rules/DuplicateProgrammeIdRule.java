@@ -11,7 +11,7 @@ public final class DuplicateProgrammeIdRule implements RuleDefinition {
     public static final String ID = FrameworkRules.DUPLICATE_PROGRAMME_ID;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "No two programme files checked together have the same programme id.", Severity.ERROR,
+            "No two programme files of one run share a programme id.", Severity.ERROR,
             RuleMetadata.Category.STRUCTURE, List.of(),
             "A programme is known by its id: findings, baselines and comparisons between revisions follow the id, "
                     + "not the file name, so that moving or renaming a file keeps its history. Two files with one "
