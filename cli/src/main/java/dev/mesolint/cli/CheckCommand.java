@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
@@ -138,7 +139,7 @@ final class CheckCommand implements Callable<Integer> {
             report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
                     .orElseGet(built::run));
             if (!noBaseline) {
-                report = workspace.applyBaseline(report);
+                report = Baseline.applyConfigured(workspace, report);
             }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());

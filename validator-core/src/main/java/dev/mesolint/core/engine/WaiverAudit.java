@@ -1,5 +1,6 @@
 package dev.mesolint.core.engine;
 
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Waiver;
@@ -7,7 +8,6 @@ import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.rules.UnusedWaiverRule;
 import java.util.Collections;
 import java.util.IdentityHashMap;
 import java.util.List;
@@ -25,7 +25,7 @@ final class WaiverAudit {
     }
 
     void report(FileScope scope) {
-        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(UnusedWaiverRule.ID)).findFirst().orElse(null);
+        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(FrameworkRules.UNUSED_WAIVER)).findFirst().orElse(null);
         if (audit == null) {
             return;
         }
