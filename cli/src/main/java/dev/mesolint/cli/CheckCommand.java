@@ -138,6 +138,8 @@ final class CheckCommand implements Callable<Integer> {
             checker = built;
             report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
                     .orElseGet(built::run));
+            built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
+                    + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
             if (!noBaseline) {
                 report = Baseline.applyConfigured(workspace, report);
             }
