@@ -57,8 +57,8 @@ class RuleMessagesTests {
                         .get(0)));
         // Schoenfeld et al. 2016 JSCR 30(7):1805-1812: 3 min beat 1 min for strength and thigh thickness
         assertEquals("warning barbell-romanian-deadlift, week 1 day 1, sets 1 -> 2, 2 -> 3, 3 -> "
-                + "barbell-bent-over-row: rest 150 s, the strength profile asks for at least 180 s after squat and "
-                + "hinge sets (fix: rest: 3min)", text(found("short-rest-compound/failing-strength.yaml",
+                + "barbell-bent-over-row: rest 150 s, the strength profile asks for at least 180 s after main squat "
+                + "and hinge sets (fix: rest: 3min)", text(found("short-rest-compound/failing-strength.yaml",
                 ShortRestCompoundRule.ID).get(0)));
         List<Finding> superset = found("short-rest-compound/failing-superset.yaml", ShortRestCompoundRule.ID);
         assertEquals(List.of("warning chest-supported-dumbbell-row, week 1 day 1, rounds 1 -> 2, 2 -> 3: rest 90 s (60 s "
