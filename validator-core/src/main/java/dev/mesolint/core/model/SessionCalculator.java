@@ -73,7 +73,9 @@ final class SessionCalculator {
                     double sr = stimulusModel.stimulatingReps(bout.reps(), bout.rir());
                     stimulatingReps += sr;
                     for (Map.Entry<Muscle, Double> credit : exercise.get().muscles().entrySet()) {
-                        double recruitment = 1 - state.of(credit.getKey());
+                        // A mini-set goes on with the units the set has already recruited: its fatigue shortens
+                        // it (fewer reps), it does not lower the recruitment its reps reach (docs/model.md).
+                        double recruitment = 1 - atStart.of(credit.getKey());
                         muscleStimulus.merge(credit.getKey(),
                                 credit.getValue() * stimulusModel.stimulus(sr, recruitment), Double::sum);
                     }

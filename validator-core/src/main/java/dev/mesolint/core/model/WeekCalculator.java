@@ -21,11 +21,13 @@ final class WeekCalculator {
     private final ModelParameters params;
     private final SessionCalculator sessions;
     private final StrengthFigures strength;
+    private final DoseResponse dose;
 
     WeekCalculator(ModelParameters params) {
         this.params = params;
         this.sessions = new SessionCalculator(params);
         this.strength = new StrengthFigures(params);
+        this.dose = new DoseResponse(params);
     }
 
     WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
@@ -48,7 +50,7 @@ final class WeekCalculator {
     private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {
         double hardSets = 0;
         double stimulatingReps = 0;
-        double stimulus = 0;
+        double effectiveSets = 0;
         double unknown = 0;
         List<Integer> hardDays = new ArrayList<>();
         for (SessionMetrics session : computed) {
@@ -58,7 +60,7 @@ final class WeekCalculator {
             }
             hardSets += m.hardSets();
             stimulatingReps += m.stimulatingReps();
-            stimulus += m.stimulus();
+            effectiveSets += m.stimulus();
             unknown += m.unknownEffortSets();
             if (m.hardSets() >= params.hardSessionMinSets()) {
                 hardDays.add(session.day());
@@ -68,6 +70,7 @@ final class WeekCalculator {
         for (int i = 1; i < hardDays.size(); i++) {
             gaps.add((hardDays.get(i) - hardDays.get(i - 1)) * HOURS_PER_DAY);
         }
-        return new MuscleWeek(hardSets, stimulatingReps, stimulus, hardDays.size(), gaps, unknown);
+        return new MuscleWeek(hardSets, stimulatingReps, dose.weeklyStimulus(effectiveSets), hardDays.size(), gaps,
+                unknown);
     }
 }
