@@ -152,7 +152,7 @@ final class CheckCommand implements Callable<Integer> {
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
                 .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent())
-                .withJunitFailAt(junitLevel);
+                .withJunitFailAt(junitLevel).withGitAt(workspace.root());
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
                 .withReasons(!noReasons).withCatalogue(checker.catalogue());
         ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording)

@@ -162,7 +162,8 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         CachedCheck.Outcome outcome = execution.check(useCache() && !figures
                 ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
         if (!targets.isEmpty()) {
-            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
+            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets, !ignoreBaseline
+                    && prepared.workspace().baselineFile().isPresent(),
                     outputDirectory.toPath());
         }
         afterCheck(outcome, reportOnly);

@@ -6,6 +6,7 @@ import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import dev.mesolint.core.rules.InternalErrorRule;
@@ -62,10 +63,14 @@ final class CheckExecution {
     }
 
     /** Writes every report of the run; a report that cannot be written is a build error. */
-    void writeReports(CachedCheck.Outcome outcome, Duration elapsed, List<ReportTarget> targets, Path folder)
+    void writeReports(CachedCheck.Outcome outcome, Duration elapsed, List<ReportTarget> targets,
+            boolean baselineInForce, Path folder)
             throws MojoExecutionException {
         try {
-            RunReports.writeAll(RunReports.input(outcome.report(), prepared.rules(), prepared.request(), elapsed),
+            ReportOptions options = ReportOptions.DEFAULTS.withGitAt(prepared.request().root())
+                    .withBaselineInForce(baselineInForce);
+            RunReports.writeAll(RunReports.input(outcome.report(), prepared.rules(), prepared.request(), elapsed)
+                    .withOptions(options),
                     targets);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot write the reports to " + folder + ": "

@@ -47,6 +47,12 @@ public record ReportOptions(Optional<String> helpUriBase, boolean baselineInForc
         return new ReportOptions(helpUriBase, baselineInForce, level, revision, branch, repositoryUri);
     }
 
+    /** The git provenance of the repository at {@code root}, when it is one (read from its files). */
+    public ReportOptions withGitAt(java.nio.file.Path root) {
+        return dev.mesolint.core.git.GitHead.at(root)
+                .map(h -> withGit(Optional.of(h.revision()), h.branch(), h.repositoryUri())).orElse(this);
+    }
+
     public ReportOptions withGit(Optional<String> newRevision, Optional<String> newBranch,
             Optional<String> newRepositoryUri) {
         return new ReportOptions(helpUriBase, baselineInForce, junitFailAt, newRevision, newBranch, newRepositoryUri);

@@ -127,7 +127,12 @@ public final class SarifReport implements ReportWriter {
         physical.set("artifactLocation", artifactLocation(f.file()));
         ObjectNode region = physical.putObject("region").put("startLine", f.location().line())
                 .put("startColumn", f.location().column());
-        sources.line(f.file(), f.location().line()).ifPresent(text -> region.putObject("snippet").put("text", text));
+        // The node's whole span when it has one; SARIF's end column is the one after the last character.
+        if (f.location().endLine() > f.location().line() || f.location().endColumn() > f.location().column()) {
+            region.put("endLine", f.location().endLine()).put("endColumn", f.location().endColumn());
+        }
+        sources.lines(f.file(), f.location().line(), f.location().endLine())
+                .ifPresent(text -> region.putObject("snippet").put("text", text));
         if (!f.location().pointer().isEmpty()) {
             location.putArray("logicalLocations").addObject()
                     .put("fullyQualifiedName", f.location().pointer()).put("kind", "element");

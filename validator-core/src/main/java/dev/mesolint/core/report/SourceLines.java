@@ -24,14 +24,26 @@ final class SourceLines {
         this.root = root;
     }
 
-    /** Line {@code number} (1-based) of the file shown as {@code shownPath} (relative to the root, or absolute). */
-    Optional<String> line(String shownPath, int number) {
+    /** A node spanning many lines is quoted by its first ones. */
+    private static final int MAX_LINES = 10;
+
+    /**
+     * Lines {@code first} to {@code last} (1-based, inclusive) of the file shown as {@code shownPath} (relative to
+     * the root, or absolute), joined by newlines.
+     */
+    Optional<String> lines(String shownPath, int first, int last) {
         List<String> lines = files.computeIfAbsent(shownPath, this::read);
-        if (number < 1 || number > lines.size()) {
+        if (first < 1 || first > lines.size()) {
             return Optional.empty();
         }
-        String text = lines.get(number - 1);
-        return Optional.of(text.length() > MAX_LENGTH ? text.substring(0, MAX_LENGTH) : text);
+        int end = Math.min(Math.min(Math.max(first, last), lines.size()), first + MAX_LINES - 1);
+        StringBuilder text = new StringBuilder();
+        for (int i = first; i <= end; i++) {
+            String line = lines.get(i - 1);
+            text.append(i > first ? "\n" : "").append(line.length() > MAX_LENGTH ? line.substring(0, MAX_LENGTH)
+                    : line);
+        }
+        return Optional.of(text.toString());
     }
 
     private List<String> read(String shownPath) {

@@ -161,7 +161,15 @@ class SarifReportTests {
         } catch (IOException e) {
             throw new java.io.UncheckedIOException(e);
         }
-        assertEquals(lines.get(week.get("startLine").asInt() - 1), week.at("/snippet/text").asString());
+        int first = week.get("startLine").asInt();
+        int last = week.has("endLine") ? week.get("endLine").asInt() : first;
+        assertEquals(String.join("\n", lines.subList(first - 1, last)), week.at("/snippet/text").asString());
+        // The node's span: the value 'week: 4' is written on one line, so it ends where its text ends.
+        assertEquals(first, last);
+        String line = lines.get(first - 1);
+        String value = line.substring(week.get("startColumn").asInt() - 1, week.get("endColumn").asInt() - 1);
+        assertEquals(value.strip(), value, "the region covers the value and nothing around it");
+        assertFalse(value.isEmpty());
     }
 
     @Test
