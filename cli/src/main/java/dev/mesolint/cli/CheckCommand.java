@@ -9,12 +9,13 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
-import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import dev.mesolint.core.rules.InternalErrorRule;
+import dev.mesolint.core.text.SafeText;
 import java.io.IOException;
+import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -34,7 +35,7 @@ import picocli.CommandLine.Parameters;
             "Reports for CI and coaches are written with --report FORMAT=PATH (repeatable), e.g.",
             "  --report sarif=target/mesolint.sarif --report html=target/mesolint.html"},
         footer = {"", ConfigOptions.PRECEDENCE, "",
-            "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
+            MesolintCommand.EXIT_CODES,
             "", "Caution: " + Mesolint.CAUTION})
 final class CheckCommand implements Callable<Integer> {
 
@@ -80,6 +81,10 @@ final class CheckCommand implements Callable<Integer> {
                 "e.g. --report sarif=target/mesolint.sarif --report html=target/mesolint.html"})
     List<ReportTarget> reports = new ArrayList<>();
 
+    @Option(names = "--allow-empty",
+            description = "Exit 0 when no programme file is found (default: a run that checks nothing fails, exit 2).")
+    boolean allowEmpty;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -96,12 +101,16 @@ final class CheckCommand implements Callable<Integer> {
         CheckRequest request;
         InstalledRules installed;
         long started = System.nanoTime();
+        boolean empty;
+        List<String> hidden;
         try {
             installed = Installed.rules();
             workspace = Workspace.open(options.toRunOptions(catalogues.files, level, Optional.ofNullable(baseline)),
                     installed.rules());
             request = workspace.request(paths);
             report = new Checker(request, installed.rules()).run();
+            empty = report.nothingChecked();
+            hidden = report.hidden();
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }
@@ -111,17 +120,29 @@ final class CheckCommand implements Callable<Integer> {
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
         ReportInput input = RunReports.input(report, installed.rules(), request, elapsed);
-        for (ReportTarget target : reports) {
-            try {
-                ReportFiles.write(input, target);
-            } catch (IOException e) {
-                spec.commandLine().getErr().println("mesolint: cannot write the " + target.format().id()
-                        + " report to " + target.path() + ": " + e.getMessage());
+        boolean unwritten = false;
+        try {
+            RunReports.writeAll(input, reports);
+        } catch (IOException e) {
+            spec.commandLine().getErr().println("mesolint: " + SafeText.line(e.getMessage()));
+            unwritten = true;
+        }
+        report.missing().forEach(m -> spec.commandLine().getErr().println("mesolint: no such file or folder: "
+                + SafeText.line(m)));
+        PrintWriter err = spec.commandLine().getErr();
+        if (!hidden.isEmpty()) {
+            err.println("mesolint: " + hidden.size() + " hidden .yaml file" + (hidden.size() == 1 ? "" : "s")
+                    + " not checked (folders skip names that start with '.'; name a file to check it): "
+                    + SafeText.line(String.join(", ", hidden)));
+        }
+        if (empty && report.missing().isEmpty()) {
+            err.println("mesolint: no programme file (*.yaml, *.yml) found in " + SafeText.line(paths.toString())
+                    + ": nothing was checked" + (allowEmpty ? "" : "; pass --allow-empty when that is expected"));
+            if (!allowEmpty) {
                 return MesolintCommand.EXIT_USAGE;
             }
         }
-        report.missing().forEach(m -> spec.commandLine().getErr().println("mesolint: no such file or folder: " + m));
-        boolean missing = !report.missing().isEmpty();
+        boolean missing = !report.missing().isEmpty() || unwritten;
         boolean internal = report.active().stream().anyMatch(f -> f.ruleId().equals(InternalErrorRule.ID));
         if (missing || internal) {
             return MesolintCommand.EXIT_USAGE;

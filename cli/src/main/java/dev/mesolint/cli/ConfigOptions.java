@@ -29,9 +29,14 @@ final class ConfigOptions {
                     + "general-fitness) or a team profile file. Overrides the goal and the configuration.")
     String profile;
 
+    @Option(names = "--allow-outside-root",
+            description = "Accept paths in the configuration (catalogues, profiles, baseline) that lead outside the "
+                    + "root once links are resolved (refused by default).")
+    boolean allowOutsideRoot;
+
     RunOptions toRunOptions(List<Path> catalogues, Optional<Severity> failOn, Optional<Path> baseline) {
         return new RunOptions(root != null ? root : Path.of(""), Optional.ofNullable(config),
-                Optional.ofNullable(profile), failOn, catalogues, baseline);
+                Optional.ofNullable(profile), failOn, catalogues, baseline, allowOutsideRoot);
     }
 
     /** {@code --catalogue}, for the commands that check programmes. */

@@ -2,18 +2,49 @@ package dev.mesolint.core.engine;
 
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
 /**
  * The outcome of one run over many files.
  *
- * @param missing inputs that named no file or folder (a usage error)
+ * @param missing     inputs that named no file or folder (a usage error)
+ * @param programmes  programme entries found: files checked plus entries reported as unreadable
+ * @param hidden      hidden {@code .yaml} files skipped in folders, shown relative to the root
  */
-public record RunReport(List<FileReport> files, Severity failOn, List<String> missing) {
+public record RunReport(List<FileReport> files, Severity failOn, List<String> missing, int programmes,
+        List<String> hidden) {
 
     public RunReport {
         files = List.copyOf(files);
         missing = List.copyOf(missing);
+        hidden = List.copyOf(hidden);
+    }
+
+    /** A report whose every file is a programme entry, with nothing hidden. */
+    public RunReport(List<FileReport> files, Severity failOn, List<String> missing) {
+        this(files, failOn, missing, files.size(), List.of());
+    }
+
+    /** The report of a run over {@code found}: {@code reports} (checked files) then the refused entries' reports. */
+    public static RunReport of(List<FileReport> reports, Severity failOn, ProgrammeFiles.Discovery found,
+            List<FileReport> refused, Path root) {
+        List<FileReport> all = new ArrayList<>(reports);
+        all.addAll(refused);
+        return new RunReport(all, failOn, found.missing().stream().map(Path::toString).toList(),
+                found.programmes().size() + found.refused().size(),
+                found.hidden().stream().map(h -> ProgrammeFiles.display(root, h)).toList());
+    }
+
+    /** True when the run found no programme to check or report: a run that checks nothing must say so. */
+    public boolean nothingChecked() {
+        return programmes == 0;
+    }
+
+    /** The same run with other file reports (a baseline applied, say); the counts are kept. */
+    public RunReport withFiles(List<FileReport> other) {
+        return new RunReport(other, failOn, missing, programmes, hidden);
     }
 
     public List<Finding> active() {

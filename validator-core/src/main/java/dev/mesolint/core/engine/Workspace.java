@@ -76,11 +76,13 @@ public final class Workspace {
                         "check the path, or leave --config out to use " + RepositoryConfig.FILE_NAME
                                 + " in the root folder");
             }
-            return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file));
+            return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file), options.root(),
+                    options.allowOutsideRoot());
         }
         Path file = options.root().resolve(RepositoryConfig.FILE_NAME);
         return Files.isRegularFile(file)
-                ? RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file))
+                ? RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file), options.root(),
+                        options.allowOutsideRoot())
                 : RepositoryConfig.NONE;
     }
 

@@ -34,8 +34,9 @@ public final class SarifReport implements ReportWriter {
         ObjectNode run = log.putArray("runs").addObject();
         run.set("tool", tool(input));
         run.putArray("invocations").add(invocation(input));
+        // No "uri": the checkout's absolute path would leak the machine's layout into code-scanning uploads; the
+        // consumer supplies the root (SARIF 2.1.0, 3.14.14: a base id without a uri is resolved by the consumer).
         run.putObject("originalUriBaseIds").putObject(SRCROOT)
-                .put("uri", directoryUri(input))
                 .putObject("description").put("text", "The folder that the checked programme paths are relative to.");
         ArrayNode results = run.putArray("results");
         for (FileReport file : input.run().files()) {
@@ -187,11 +188,6 @@ public final class SarifReport implements ReportWriter {
         } catch (URISyntaxException e) {
             throw new IllegalArgumentException("cannot express " + path + " as a URI", e);
         }
-    }
-
-    private static String directoryUri(ReportInput input) {
-        String uri = input.root().toUri().toString();
-        return uri.endsWith("/") ? uri : uri + "/";
     }
 
     /** {@code week-sequence} → {@code WeekSequence}: SARIF's readable rule name. */
