@@ -55,6 +55,15 @@ final class MetricsCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** A file to write, its folders created first, as for every output of mesolint. */
+    private static Writer newFile(Path file) throws IOException {
+        Path parent = file.toAbsolutePath().getParent();
+        if (parent != null) {
+            Files.createDirectories(parent);
+        }
+        return Files.newBufferedWriter(file, StandardCharsets.UTF_8);
+    }
+
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
@@ -63,7 +72,7 @@ final class MetricsCommand implements Callable<Integer> {
         try {
             // The same repository configuration and profiles as 'check', so the figures use the same parameters.
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, Optional.empty(),
+            Workspace workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, Optional.empty(),
                     Optional.empty()), installed.rules());
             run = new Checker(workspace.request(paths), installed.rules()).run();
         } catch (ConfigProblem e) {
@@ -82,12 +91,12 @@ final class MetricsCommand implements Callable<Integer> {
         }
         new MetricsTableFormatter().write(measured, out);
         if (json != null) {
-            try (Writer w = Files.newBufferedWriter(json, StandardCharsets.UTF_8)) {
+            try (Writer w = newFile(json)) {
                 new MetricsJsonWriter().write(measured, w);
             }
         }
         if (csv != null) {
-            try (Writer w = Files.newBufferedWriter(csv, StandardCharsets.UTF_8)) {
+            try (Writer w = newFile(csv)) {
                 new MetricsCsvWriter().write(measured, w);
             }
         }
