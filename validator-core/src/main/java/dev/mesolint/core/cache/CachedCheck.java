@@ -2,9 +2,11 @@ package dev.mesolint.core.cache;
 
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.source.SafeFiles;
 import java.io.IOException;
@@ -68,8 +70,10 @@ public final class CachedCheck {
                 }
             }
         }
+        // Ids are compared across all files, cached or not, after the cache has stored each file's own findings.
+        List<FileReport> marked = DuplicateProgrammeIds.mark(reports, Severity.ERROR);
         List<FileReport> refused = found.refused().isEmpty() ? List.of() : checker.get().refusedReports(found);
-        RunReport report = RunReport.of(reports, request.failOn(), found, refused, request.root());
+        RunReport report = RunReport.of(marked, request.failOn(), found, refused, request.root());
         return new Outcome(report, reused, pending.size() - reused, unreadable);
     }
 
