@@ -88,7 +88,7 @@ public final class Checker {
     /** One report per entry that should have been a programme but cannot be read as one: never dropped silently. */
     public List<FileReport> refusedReports(ProgrammeFiles.Discovery found) {
         return found.refused().stream()
-                .map(r -> violationReport(ProgrammeFiles.display(request.root(), r.path()), null, YamlSyntaxRule.ID,
+                .map(r -> violationReport(ProgrammeFiles.display(request.root(), r.path()), null, FrameworkRules.YAML_SYNTAX,
                         List.of(new Violation(Location.START, r.reason(), r.hint()))))
                 .toList();
     }
