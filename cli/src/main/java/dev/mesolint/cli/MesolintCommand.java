@@ -17,7 +17,8 @@ import picocli.CommandLine.Command;
             MesolintCommand.EXIT_CODES,
             "", "Caution: " + Mesolint.CAUTION},
         subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
-            ExplainCommand.class, CatalogueCommand.class, AutoComplete.GenerateCompletion.class,
+            ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
+            AutoComplete.GenerateCompletion.class,
             CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;
