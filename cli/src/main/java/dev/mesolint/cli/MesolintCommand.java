@@ -82,7 +82,7 @@ public final class MesolintCommand implements Runnable {
     }
 
     /** A clear message for a run that ran out of memory or stack; exit 3 tells CI it was not a finding. */
-    private static int resourceLimit(Error e, PrintWriter err) {
+    static int resourceLimit(Error e, PrintWriter err) {
         err.println("mesolint: the run ran out of " + (e instanceof OutOfMemoryError ? "memory" : "stack")
                 + " and was stopped; its results are incomplete. Give Java more memory (e.g. JAVA_TOOL_OPTIONS="
                 + "-Xmx1g), or check fewer files at a time, and report the file that caused it.");
