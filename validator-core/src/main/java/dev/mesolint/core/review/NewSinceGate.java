@@ -1,0 +1,62 @@
+package dev.mesolint.core.review;
+
+import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleMetadata;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Counts only what a change introduced: the head's findings that the base revision already had are marked as held
+ * (like a baseline's), with the baseline's safety policy: these always count, held or not,
+ * <ul>
+ * <li>errors of the safety rules (the athlete-constraint rules among them), since an athlete's constraint is
+ * never a debt to carry, and</li>
+ * <li>every finding of a file that did not load at the base or at the head, since nothing in it was checked.</li>
+ * </ul>
+ */
+public final class NewSinceGate {
+    private final Set<String> safetyRules = new HashSet<>();
+
+    public NewSinceGate(List<? extends RuleDefinition> rules) {
+        rules.stream().filter(r -> r.metadata().category() == RuleMetadata.Category.SAFETY)
+                .forEach(r -> safetyRules.add(r.id()));
+    }
+
+    /** The head's run with the findings the base already had marked as held; nothing else changes. */
+    public RunReport apply(Review review) {
+        Map<String, ProgrammeChange> byHeadPath = new HashMap<>();
+        review.programmes().forEach(p -> p.after().ifPresent(path -> byHeadPath.put(path, p)));
+        List<FileReport> files = new ArrayList<>();
+        for (FileReport file : review.after().files()) {
+            ProgrammeChange change = byHeadPath.get(file.displayPath());
+            if (change == null || !change.loadedBefore() || !change.loadedAfter()) {
+                files.add(file);
+                continue;
+            }
+            // Held findings are matched one for one, by identity, as FindingChanges sorted them.
+            List<Finding> held = new ArrayList<>(change.findings().unchanged());
+            List<Finding> findings = new ArrayList<>();
+            for (Finding f : file.findings()) {
+                if (!alwaysCounts(f) && held.remove(f)) {
+                    findings.add(f.asBaselined());
+                } else {
+                    findings.add(f);
+                }
+            }
+            files.add(new FileReport(file.displayPath(), file.programme(), file.profile(), findings, file.metrics()));
+        }
+        return new RunReport(files, review.after().failOn(), review.after().missing());
+    }
+
+    private boolean alwaysCounts(Finding f) {
+        return f.severity() == Severity.ERROR && safetyRules.contains(f.ruleId());
+    }
+}
