@@ -35,6 +35,11 @@ import java.util.Objects;
  * @param exerciseChangeoverMinutes minutes to set up each exercise; 1.0 (0..5)
  * @param hardSessionMinSets        credited hard sets that make a session train a muscle hard; 1.0 (0.5..5)
  * @param acuteChronicWeeks         weeks before the current one in the chronic mean; 4 (1..8)
+ * @param intensityZone1From        lower bound (share of 1RM) of the first intensity zone; 0.55 (0.3..1.0)
+ * @param intensityZone2From        lower bound of the second zone; 0.70 (0.3..1.0), above the first
+ * @param intensityZone3From        lower bound of the third zone; 0.80 (0.3..1.0), above the second
+ * @param intensityZone4From        lower bound of the fourth, open-ended zone; 0.90 (0.3..1.0), above the third
+ * @param heavyRepsFrom             share of 1RM from which a lift's reps count as heavy reps; 0.80 (0.5..1.0)
  */
 public record ModelParameters(
         OneRepMaxRelation oneRepMaxRelation,
@@ -63,7 +68,12 @@ public record ModelParameters(
         double warmUpSetMinutes,
         double exerciseChangeoverMinutes,
         double hardSessionMinSets,
-        int acuteChronicWeeks) {
+        int acuteChronicWeeks,
+        double intensityZone1From,
+        double intensityZone2From,
+        double intensityZone3From,
+        double intensityZone4From,
+        double heavyRepsFrom) {
 
     private static final ModelParameters DEFAULTS = new Builder().build();
 
@@ -95,6 +105,16 @@ public record ModelParameters(
         within("exerciseChangeoverMinutes", exerciseChangeoverMinutes, 0, 5);
         within("hardSessionMinSets", hardSessionMinSets, 0.5, 5);
         within("acuteChronicWeeks", acuteChronicWeeks, 1, 8);
+        within("intensityZone1From", intensityZone1From, 0.3, 1.0);
+        within("intensityZone2From", intensityZone2From, 0.3, 1.0);
+        within("intensityZone3From", intensityZone3From, 0.3, 1.0);
+        within("intensityZone4From", intensityZone4From, 0.3, 1.0);
+        if (!(intensityZone1From < intensityZone2From && intensityZone2From < intensityZone3From
+                && intensityZone3From < intensityZone4From)) {
+            throw new IllegalArgumentException("intensity zone bounds must rise, were " + intensityZone1From + ", "
+                    + intensityZone2From + ", " + intensityZone3From + ", " + intensityZone4From);
+        }
+        within("heavyRepsFrom", heavyRepsFrom, 0.5, 1.0);
     }
 
     /** The documented defaults. */
@@ -142,6 +162,11 @@ public record ModelParameters(
         private double exerciseChangeoverMinutes = 1.0;
         private double hardSessionMinSets = 1.0;
         private int acuteChronicWeeks = 4;
+        private double intensityZone1From = 0.55;
+        private double intensityZone2From = 0.70;
+        private double intensityZone3From = 0.80;
+        private double intensityZone4From = 0.90;
+        private double heavyRepsFrom = 0.80;
 
         public Builder() {
         }
@@ -174,6 +199,11 @@ public record ModelParameters(
             exerciseChangeoverMinutes = p.exerciseChangeoverMinutes;
             hardSessionMinSets = p.hardSessionMinSets;
             acuteChronicWeeks = p.acuteChronicWeeks;
+            intensityZone1From = p.intensityZone1From;
+            intensityZone2From = p.intensityZone2From;
+            intensityZone3From = p.intensityZone3From;
+            intensityZone4From = p.intensityZone4From;
+            heavyRepsFrom = p.heavyRepsFrom;
         }
 
         public Builder oneRepMaxRelation(OneRepMaxRelation v) {
@@ -311,6 +341,31 @@ public record ModelParameters(
             return this;
         }
 
+        public Builder intensityZone1From(double v) {
+            intensityZone1From = v;
+            return this;
+        }
+
+        public Builder intensityZone2From(double v) {
+            intensityZone2From = v;
+            return this;
+        }
+
+        public Builder intensityZone3From(double v) {
+            intensityZone3From = v;
+            return this;
+        }
+
+        public Builder intensityZone4From(double v) {
+            intensityZone4From = v;
+            return this;
+        }
+
+        public Builder heavyRepsFrom(double v) {
+            heavyRepsFrom = v;
+            return this;
+        }
+
         public ModelParameters build() {
             return new ModelParameters(oneRepMaxRelation, effortToleranceReps, hardSetMaxRir, amrapDefaultReps,
                     stimulatingRepsCeiling, recruitmentFloor, fatiguePerRep, proximityDecay, highRepThreshold,
@@ -318,7 +373,8 @@ public record ModelParameters(
                     dropSetExtraReps, dropSetLoadDrop, dropSetPauseSeconds, restPauseMiniSets, restPauseMiniSetReps,
                     restPausePauseSeconds, diminishingReturnsScale, defaultRestSeconds, supersetChangeoverSeconds,
                     defaultRepSeconds, warmUpSetMinutes, exerciseChangeoverMinutes, hardSessionMinSets,
-                    acuteChronicWeeks);
+                    acuteChronicWeeks, intensityZone1From, intensityZone2From, intensityZone3From,
+                    intensityZone4From, heavyRepsFrom);
         }
     }
 }

@@ -71,6 +71,11 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
         return weeks.stream().filter(w -> w.number() == number).findFirst();
     }
 
+    /** The lift's strength figures in every week that does it, in week order. */
+    public List<LiftWeek> liftWeeks(String exerciseId) {
+        return weeks.stream().flatMap(w -> w.lift(exerciseId).stream()).toList();
+    }
+
     /** Numbers of the weeks the programme marks as deloads. */
     public List<Integer> deloadWeeks() {
         return weeks.stream().filter(WeekMetrics::deload).map(WeekMetrics::number).toList();

@@ -27,6 +27,7 @@ final class SessionCalculator {
     private final StimulusModel stimulusModel;
     private final FatigueModel fatigueModel;
     private final DoseResponse dose;
+    private final StrengthFigures strength;
 
     SessionCalculator(ModelParameters params) {
         this.params = params;
@@ -36,6 +37,7 @@ final class SessionCalculator {
         this.stimulusModel = new StimulusModel(params);
         this.fatigueModel = new FatigueModel(params);
         this.dose = new DoseResponse(params);
+        this.strength = new StrengthFigures(params);
     }
 
     SessionMetrics compute(Session session, Catalogue catalogue, Athlete athlete, LoadUnit units) {
@@ -94,7 +96,7 @@ final class SessionCalculator {
         Map<Muscle, MuscleSession> muscles = new EnumMap<>(Muscle.class);
         tallies.forEach((muscle, tally) -> muscles.put(muscle, tally.toSession(dose)));
         return new SessionMetrics(session.day(), session.name(), session.location(), seconds / 60, muscles, sets,
-                volumeLoad);
+                volumeLoad, strength.perSession(sets));
     }
 
     private static void tally(Map<Muscle, MuscleTally> tallies, Exercise exercise, Effort effort, boolean hard,

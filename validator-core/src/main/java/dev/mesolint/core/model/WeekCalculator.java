@@ -20,10 +20,12 @@ final class WeekCalculator {
 
     private final ModelParameters params;
     private final SessionCalculator sessions;
+    private final StrengthFigures strength;
 
     WeekCalculator(ModelParameters params) {
         this.params = params;
         this.sessions = new SessionCalculator(params);
+        this.strength = new StrengthFigures(params);
     }
 
     WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
@@ -39,7 +41,7 @@ final class WeekCalculator {
         }
         double volumeLoad = computed.stream().mapToDouble(SessionMetrics::volumeLoad).sum();
         return new WeekMetrics(week.number(), week.deload(), week.location(), muscles, computed, volumeLoad, Map.of(),
-                Map.of());
+                Map.of(), strength.perWeek(week.number(), computed));
     }
 
     private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {

@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -20,16 +21,19 @@ import java.util.OptionalDouble;
  *                     is missing when there is no earlier week or that mean is 0
  * @param change       relative change in hard sets from the week before ({@code 0.25} = 25% more); a muscle is
  *                     missing in the first week or when it had no hard sets the week before
+ * @param lifts        per lift (exercise), in the order each first appears in the week: top set, mean intensity,
+ *                     volume load and heavy reps
  */
 public record WeekMetrics(int number, boolean deload, Location location, Map<Muscle, MuscleWeek> muscles,
         List<SessionMetrics> sessions, double volumeLoad, Map<Muscle, Double> acuteChronic,
-        Map<Muscle, Double> change) {
+        Map<Muscle, Double> change, List<LiftWeek> lifts) {
 
     public WeekMetrics {
         muscles = copy(muscles);
         sessions = List.copyOf(sessions);
         acuteChronic = copy(acuteChronic);
         change = copy(change);
+        lifts = List.copyOf(lifts);
     }
 
     private static <V> Map<Muscle, V> copy(Map<Muscle, V> map) {
@@ -40,6 +44,11 @@ public record WeekMetrics(int number, boolean deload, Location location, Map<Mus
     public double hardSets(Muscle muscle) {
         MuscleWeek m = muscles.get(muscle);
         return m == null ? 0 : m.hardSets();
+    }
+
+    /** The lift's strength figures this week; empty when the week does not do it. */
+    public Optional<LiftWeek> lift(String exerciseId) {
+        return lifts.stream().filter(l -> l.exerciseId().equals(exerciseId)).findFirst();
     }
 
     public OptionalDouble acuteChronic(Muscle muscle) {
@@ -54,6 +63,6 @@ public record WeekMetrics(int number, boolean deload, Location location, Map<Mus
 
     /** This week with its trend figures. */
     WeekMetrics withTrends(Map<Muscle, Double> acuteChronic, Map<Muscle, Double> change) {
-        return new WeekMetrics(number, deload, location, muscles, sessions, volumeLoad, acuteChronic, change);
+        return new WeekMetrics(number, deload, location, muscles, sessions, volumeLoad, acuteChronic, change, lifts);
     }
 }

@@ -2,6 +2,9 @@ package dev.mesolint.core.report;
 
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.EffortAgreement;
+import dev.mesolint.core.model.IntensityZone;
+import dev.mesolint.core.model.LiftSession;
+import dev.mesolint.core.model.LiftWeek;
 import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.model.MuscleSession;
 import dev.mesolint.core.model.MuscleWeek;
@@ -70,6 +73,33 @@ public final class MetricsJsonWriter {
         muscleNumbers(node.putObject("change"), week.change());
         ArrayNode sessions = node.putArray("sessions");
         week.sessions().forEach(s -> session(sessions.addObject(), s));
+        ArrayNode lifts = node.putArray("lifts");
+        week.lifts().forEach(l -> liftWeek(lifts.addObject(), l));
+    }
+
+    private static void liftWeek(ObjectNode node, LiftWeek lift) {
+        node.put("exercise", lift.exerciseId());
+        node.put("sets", lift.sets());
+        number(node, "reps", lift.reps());
+        optional(node, "topSetFraction", lift.topSetFraction());
+        optional(node, "topSetLoad", lift.topSetLoad());
+        optional(node, "meanIntensity", lift.meanIntensity());
+        optional(node, "volumeLoad", lift.volumeLoad());
+        number(node, "heavyReps", lift.heavyReps());
+        node.put("unknownIntensitySets", lift.unknownIntensitySets());
+    }
+
+    private static void liftSession(ObjectNode node, LiftSession lift) {
+        node.put("exercise", lift.exerciseId());
+        ArrayNode zones = node.putArray("zones");
+        for (IntensityZone zone : lift.zones()) {
+            ObjectNode z = zones.addObject();
+            number(z, "from", zone.from());
+            optional(z, "below", zone.below());
+            z.put("sets", zone.sets());
+            number(z, "reps", zone.reps());
+        }
+        number(node, "unknownIntensityReps", lift.unknownIntensityReps());
     }
 
     private static void muscleWeek(ObjectNode node, MuscleWeek m) {
@@ -92,6 +122,8 @@ public final class MetricsJsonWriter {
         session.muscles().forEach((muscle, m) -> muscleSession(muscles.putObject(muscle.yamlName()), m));
         ArrayNode sets = node.putArray("sets");
         session.sets().forEach(s -> set(sets.addObject(), s));
+        ArrayNode lifts = node.putArray("lifts");
+        session.lifts().forEach(l -> liftSession(lifts.addObject(), l));
     }
 
     private static void muscleSession(ObjectNode node, MuscleSession m) {

@@ -109,6 +109,22 @@ class MetricsJsonWriterTests {
     }
 
     @Test
+    void eachWeekAndSessionListsItsLiftsStrengthFigures() {
+        JsonNode week = written.get("programmes").get(0).get("weeks").get(0);
+        JsonNode bench = week.get("lifts").get(0);
+        assertEquals("barbell-bench-press", bench.get("exercise").asString());
+        // 3 x 8 at 75% of a 100 kg 1RM: top set 0.75, 24 x 75 = 1800 kg, no reps at 80% or more.
+        assertEquals(0.75, bench.get("topSetFraction").asDouble(), 1e-9);
+        assertEquals(1800, bench.get("volumeLoad").asDouble(), 1e-9);
+        assertEquals(0, bench.get("heavyReps").asDouble(), 1e-9);
+        JsonNode zones = week.get("sessions").get(0).get("lifts").get(0).get("zones");
+        assertEquals(5, zones.size());
+        // 75% falls in the 70-80% zone.
+        assertEquals(24, zones.get(2).get("reps").asDouble(), 1e-9);
+        assertTrue(zones.get(4).get("below").isNull());
+    }
+
+    @Test
     void everyPropertyInTheSchemaHasADescription() throws IOException {
         List<String> missing = new ArrayList<>();
         collectUndescribed(schemaNode(), "", missing);
