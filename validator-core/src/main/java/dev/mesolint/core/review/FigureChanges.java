@@ -1,6 +1,7 @@
 package dev.mesolint.core.review;
 
 import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.model.LiftWeek;
 import dev.mesolint.core.model.MuscleWeek;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.model.SessionMetrics;
@@ -10,6 +11,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -135,39 +137,24 @@ public record FigureChanges(List<MuscleWeekChange> muscles, List<SessionChange> 
         return rows;
     }
 
-    /** One exercise's week: the heaviest share of 1RM and the summed volume load, each where known. */
-    private record LiftWeek(OptionalDouble topPercent, OptionalDouble volumeLoad) {
-    }
-
+    /** Every lift of every week, keyed by week then exercise. */
     private static Map<String, LiftWeek> liftsByKey(ProgrammeMetrics metrics) {
         Map<String, LiftWeek> byKey = new TreeMap<>();
         for (WeekMetrics w : metrics.weeks()) {
-            for (SessionMetrics s : w.sessions()) {
-                for (SetMetrics set : s.sets()) {
-                    String key = String.format(java.util.Locale.ROOT, "%06d|%s", w.number(), set.exerciseId());
-                    LiftWeek seen = byKey.getOrDefault(key, new LiftWeek(OptionalDouble.empty(), OptionalDouble.empty()));
-                    OptionalDouble percent = set.effort().loadFraction().isPresent()
-                            ? OptionalDouble.of(set.effort().loadFraction().getAsDouble() * 100) : OptionalDouble.empty();
-                    byKey.put(key, new LiftWeek(max(seen.topPercent(), percent), sum(seen.volumeLoad(),
-                            set.volumeLoad())));
-                }
+            for (LiftWeek lift : w.lifts()) {
+                byKey.put(String.format(Locale.ROOT, "%06d|%s", w.number(), lift.exerciseId()), lift);
             }
         }
         return byKey;
     }
 
-    private static OptionalDouble max(OptionalDouble a, OptionalDouble b) {
-        if (a.isEmpty()) {
-            return b;
-        }
-        return b.isEmpty() ? a : OptionalDouble.of(Math.max(a.getAsDouble(), b.getAsDouble()));
+    private static OptionalDouble percent(LiftWeek lift) {
+        return lift == null || lift.topSetFraction().isEmpty() ? OptionalDouble.empty()
+                : OptionalDouble.of(lift.topSetFraction().getAsDouble() * 100);
     }
 
-    private static OptionalDouble sum(OptionalDouble a, OptionalDouble b) {
-        if (a.isEmpty()) {
-            return b;
-        }
-        return b.isEmpty() ? a : OptionalDouble.of(a.getAsDouble() + b.getAsDouble());
+    private static OptionalDouble volumeLoad(LiftWeek lift) {
+        return lift == null ? OptionalDouble.empty() : lift.volumeLoad();
     }
 
     private static List<LiftChange> lifts(ProgrammeMetrics before, ProgrammeMetrics after) {
@@ -175,15 +162,14 @@ public record FigureChanges(List<MuscleWeekChange> muscles, List<SessionChange> 
         Map<String, LiftWeek> a = liftsByKey(after);
         TreeSet<String> keys = new TreeSet<>(b.keySet());
         keys.addAll(a.keySet());
-        LiftWeek none = new LiftWeek(OptionalDouble.empty(), OptionalDouble.empty());
         List<LiftChange> rows = new ArrayList<>();
         for (String k : keys) {
-            LiftWeek lb = b.getOrDefault(k, none);
-            LiftWeek la = a.getOrDefault(k, none);
+            LiftWeek lb = b.get(k);
+            LiftWeek la = a.get(k);
             int bar = k.indexOf('|');
             LiftChange row = new LiftChange(Integer.parseInt(k.substring(0, bar)), k.substring(bar + 1),
-                    new Delta(lb.topPercent(), la.topPercent(), PERCENT_STEP),
-                    new Delta(lb.volumeLoad(), la.volumeLoad(), LOAD_STEP));
+                    new Delta(percent(lb), percent(la), PERCENT_STEP),
+                    new Delta(volumeLoad(lb), volumeLoad(la), LOAD_STEP));
             if (row.changed()) {
                 rows.add(row);
             }
