@@ -22,13 +22,26 @@ import java.util.Optional;
  */
 public final class HtmlReport implements ReportWriter {
     private final Path reportDir;
+    private final List<HtmlSection> sections;
 
     /**
      * @param reportDir the folder the page will be written to, so that links to programme files are relative to it;
      *                  null to link by the paths as shown
      */
     public HtmlReport(Path reportDir) {
+        this(reportDir, List.of());
+    }
+
+    private HtmlReport(Path reportDir, List<HtmlSection> sections) {
         this.reportDir = reportDir == null ? null : reportDir.toAbsolutePath().normalize();
+        this.sections = List.copyOf(sections);
+    }
+
+    /** This report with {@code section} added before the programmes, after any added before. */
+    public HtmlReport withSection(HtmlSection section) {
+        List<HtmlSection> all = new java.util.ArrayList<>(sections);
+        all.add(section);
+        return new HtmlReport(reportDir, all);
     }
 
     @Override
@@ -38,6 +51,7 @@ public final class HtmlReport implements ReportWriter {
         page.append("<body>\n").append(Svg.patternDefs());
         masthead(page, input);
         page.append("<main>\n");
+        sections.forEach(section -> page.append(section.html()));
         List<FileReport> files = input.run().files();
         for (int i = 0; i < files.size(); i++) {
             programme(page, input, files.get(i), "p" + (i + 1));

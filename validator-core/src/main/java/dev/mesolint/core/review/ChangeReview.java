@@ -44,7 +44,7 @@ public final class ChangeReview {
                         : SideCheck.of(request.options(), request.inputs(), headFiles.root(), rules,
                                 "at " + head.get().label());
                 return new Review(base, head, ProgrammePairing.compare(before, after, changes), before.report(),
-                        after.report());
+                        after.report(), after.request());
             }
         }
     }

@@ -30,14 +30,26 @@ public final class NewSinceGate {
                 .forEach(r -> safetyRules.add(r.id()));
     }
 
-    /** The head's run with the findings the base already had marked as held; nothing else changes. */
+    /** The head's run with the findings the base already had marked as held, but for the policy's exceptions. */
     public RunReport apply(Review review) {
+        return mark(review, true);
+    }
+
+    /**
+     * The head's run with every finding the base already had marked as held, exceptions included: what each
+     * finding's state is, rather than whether it counts (SARIF's {@code baselineState}).
+     */
+    static RunReport markUnchanged(Review review) {
+        return new NewSinceGate(List.of()).mark(review, false);
+    }
+
+    private RunReport mark(Review review, boolean policy) {
         Map<String, ProgrammeChange> byHeadPath = new HashMap<>();
         review.programmes().forEach(p -> p.after().ifPresent(path -> byHeadPath.put(path, p)));
         List<FileReport> files = new ArrayList<>();
         for (FileReport file : review.after().files()) {
             ProgrammeChange change = byHeadPath.get(file.displayPath());
-            if (change == null || !change.loadedBefore() || !change.loadedAfter()) {
+            if (change == null || policy && (!change.loadedBefore() || !change.loadedAfter())) {
                 files.add(file);
                 continue;
             }
@@ -45,7 +57,7 @@ public final class NewSinceGate {
             List<Finding> held = new ArrayList<>(change.findings().unchanged());
             List<Finding> findings = new ArrayList<>();
             for (Finding f : file.findings()) {
-                if (!alwaysCounts(f) && held.remove(f)) {
+                if (!(policy && alwaysCounts(f)) && held.remove(f)) {
                     findings.add(f.asBaselined());
                 } else {
                     findings.add(f);

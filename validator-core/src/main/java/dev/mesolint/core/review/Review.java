@@ -1,5 +1,6 @@
 package dev.mesolint.core.review;
 
+import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.git.Revision;
 import java.util.List;
@@ -13,9 +14,10 @@ import java.util.Optional;
  * @param programmes every programme at either revision, in path order, changed or not
  * @param before     the check of the base revision
  * @param after      the check of the head
+ * @param afterRequest how the head was checked (its configuration and profiles), for the head's reports
  */
 public record Review(Revision base, Optional<Revision> head, List<ProgrammeChange> programmes, RunReport before,
-        RunReport after) {
+        RunReport after, CheckRequest afterRequest) {
 
     public Review {
         Objects.requireNonNull(base, "base");
