@@ -52,7 +52,7 @@ final class BaselineCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, Optional.empty(), Optional.empty()),
+            Workspace workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, Optional.empty(), Optional.empty()),
                     installed.rules());
             RunReport report = new Checker(workspace.request(paths), installed.rules()).run();
             if (!report.missing().isEmpty()) {

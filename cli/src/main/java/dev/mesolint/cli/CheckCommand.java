@@ -98,7 +98,7 @@ final class CheckCommand implements Callable<Integer> {
         long started = System.nanoTime();
         try {
             installed = Installed.rules();
-            workspace = Workspace.open(options.toRunOptions(catalogues.files, level, Optional.ofNullable(baseline)),
+            workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, level, Optional.ofNullable(baseline)),
                     installed.rules());
             request = workspace.request(paths);
             report = new Checker(request, installed.rules()).run();

@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.config.RepositoryConfig;
+import dev.mesolint.core.config.RepositoryLayout;
 import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.finding.Severity;
 import java.nio.file.Path;
@@ -12,12 +13,16 @@ import picocli.CommandLine.Option;
 /** The options every command that reads a programme repository shares: where it is and how it is configured. */
 final class ConfigOptions {
     static final String PRECEDENCE = "Settings come from, first match wins: command-line options, then the "
-            + "repository configuration (" + RepositoryConfig.FILE_NAME + " in --root, or --config FILE), then the "
-            + "built-in defaults. --catalogue files are added after the configuration's catalogues.";
+            + "repository configuration (--config FILE, else the nearest " + RepositoryConfig.FILE_NAME
+            + " above the checked paths, up to the repository root), then the built-in defaults. --catalogue files "
+            + "are added after the configuration's catalogues. The repository root is the nearest folder above the "
+            + "checked paths that holds .git, or a " + RepositoryConfig.FILE_NAME + " saying 'root: true'; paths are "
+            + "shown relative to it, so the verdict is the same from any folder.";
 
     @Option(names = "--root", paramLabel = "DIR",
-            description = "The repository folder: paths are shown relative to it, and " + RepositoryConfig.FILE_NAME
-                    + " is read from it (default: the current folder).")
+            description = "The repository root: paths are shown relative to it, and the search for "
+                    + RepositoryConfig.FILE_NAME + " stops there (default: found by walking up from the checked paths "
+                    + "to the folder holding .git).")
     Path root;
 
     @Option(names = "--config", paramLabel = "FILE",
@@ -29,8 +34,10 @@ final class ConfigOptions {
                     + "general-fitness) or a team profile file. Overrides the goal and the configuration.")
     String profile;
 
-    RunOptions toRunOptions(List<Path> catalogues, Optional<Severity> failOn, Optional<Path> baseline) {
-        return new RunOptions(root != null ? root : Path.of(""), Optional.ofNullable(config),
+    /** The options for checking {@code inputs}: the root and configuration found by walking up from them. */
+    RunOptions toRunOptions(List<Path> inputs, List<Path> catalogues, Optional<Severity> failOn,
+            Optional<Path> baseline) {
+        return new RunOptions(RepositoryLayout.discover(inputs, Optional.ofNullable(root), Path.of("")), Optional.ofNullable(config),
                 Optional.ofNullable(profile), failOn, catalogues, baseline);
     }
 

@@ -63,7 +63,7 @@ final class MetricsCommand implements Callable<Integer> {
         try {
             // The same repository configuration and profiles as 'check', so the figures use the same parameters.
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(catalogues.files, Optional.empty(),
+            Workspace workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, Optional.empty(),
                     Optional.empty()), installed.rules());
             run = new Checker(workspace.request(paths), installed.rules()).run();
         } catch (ConfigProblem e) {

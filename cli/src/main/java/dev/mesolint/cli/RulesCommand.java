@@ -34,7 +34,7 @@ final class RulesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(List.of(), Optional.empty(), Optional.empty()),
+            Workspace workspace = Workspace.open(options.toRunOptions(List.of(), List.of(), Optional.empty(), Optional.empty()),
                     installed.rules());
             ResolvedProfile profile = workspace.profiles().get(workspace.defaultProfile());
             out.println("Rules in the " + profile.name() + " profile"

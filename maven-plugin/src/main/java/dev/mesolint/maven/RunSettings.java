@@ -3,6 +3,7 @@ package dev.mesolint.maven;
 import dev.mesolint.core.cache.ConfigurationKey;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
+import dev.mesolint.core.config.RepositoryLayout;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunOptions;
@@ -23,7 +24,7 @@ import org.apache.maven.plugin.MojoExecutionException;
  * The Mojo parameters that decide what is checked and how, handed to the core's {@link Workspace} (which reads the
  * repository configuration and lets the parameters win). Values that are {@code null} were not set.
  */
-record RunSettings(Path root, File programmes, File config, String profile, String failOn, List<File> catalogues,
+record RunSettings(Path projectDir, File programmes, File config, String profile, String failOn, List<File> catalogues,
         File baseline) {
 
     /** How configuration problems the core reports by command-line option are named for Maven users. */
@@ -42,7 +43,7 @@ record RunSettings(Path root, File programmes, File config, String profile, Stri
         }
         if (config != null && !config.isFile()) {
             throw error("config", "no configuration file at " + config + "; check the path, or leave the "
-                    + "parameter out to use .mesolint.yaml in " + root);
+                    + "parameter out to use the nearest .mesolint.yaml above the programmes");
         }
         if (baseline != null && !baseline.isFile()) {
             throw error("baseline", "no baseline file at " + baseline + "; write one with 'mesolint baseline "
@@ -61,9 +62,11 @@ record RunSettings(Path root, File programmes, File config, String profile, Stri
                     "must be error, warning or info, not '" + failOn + "'")));
         }
         // A profile file named by the parameter is relative to the project folder, like every path in a POM.
-        Optional<String> forced = Optional.ofNullable(profile).map(p -> ProfileRef.of(p, root, "profile", null)
+        Optional<String> forced = Optional.ofNullable(profile).map(p -> ProfileRef.of(p, projectDir, "profile", null)
                 .file().map(Path::toString).orElse(p));
-        RunOptions options = new RunOptions(root, Optional.ofNullable(config).map(File::toPath), forced, level, extra,
+        // The repository root and configuration are found by walking up from the programmes, as on the command line.
+        RepositoryLayout layout = RepositoryLayout.discover(List.of(programmes.toPath()), Optional.empty(), projectDir);
+        RunOptions options = new RunOptions(layout, Optional.ofNullable(config).map(File::toPath), forced, level, extra,
                 Optional.ofNullable(baseline).map(File::toPath));
         try {
             List<RuleDefinition> rules = InstalledRules.discover(RunSettings.class.getClassLoader()).rules();

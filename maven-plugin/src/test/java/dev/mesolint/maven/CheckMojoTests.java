@@ -39,6 +39,21 @@ class CheckMojoTests {
     }
 
     @Test
+    void aModuleInsideARepositoryReadsTheRootConfigurationAndShowsPathsFromTheRoot() throws IOException {
+        // The Maven project is one folder of a git repository; the team's configuration sits at the top.
+        Files.createDirectories(dir.resolve(".git"));
+        Files.writeString(dir.resolve(".mesolint.yaml"), "fail-on: info\n");
+        MojoFixture module = new MojoFixture(dir.resolve("coaching")).programme("light.yaml",
+                MojoFixture.PROGRAMME.replace("sets: 4", "sets: 3"));
+
+        MojoFailureException failure = assertThrows(MojoFailureException.class, () -> module.check().execute());
+
+        assertTrue(failure.getMessage().contains("at or above the fail level 'info'"), failure.getMessage());
+        assertTrue(module.log.lines.stream().anyMatch(l -> l.startsWith("[INFO] coaching/programmes/light.yaml:10:5: info weekly-volume-min")),
+                module.log.text());
+    }
+
+    @Test
     void whereEachSettingCameFromIsLoggedAtDebug() throws Exception {
         MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
         CheckMojo mojo = repo.check();
@@ -66,7 +81,7 @@ class CheckMojoTests {
         overridden.failOn = "error";
         overridden.execute();
         assertTrue(repo.log.lines.contains("[DEBUG] mesolint: failOn = error (plugin parameter failOn)"));
-        assertTrue(repo.log.lines.contains("[DEBUG] mesolint: config = .mesolint.yaml (found in " + dir + ")"),
+        assertTrue(repo.log.lines.contains("[DEBUG] mesolint: config = .mesolint.yaml (the nearest .mesolint.yaml above the checked paths)"),
                 repo.log.text());
     }
 

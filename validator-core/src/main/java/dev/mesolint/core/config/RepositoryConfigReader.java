@@ -15,11 +15,25 @@ import tools.jackson.databind.JsonNode;
 
 /** Reads and checks the repository configuration file; every problem is located at the key or value at fault. */
 public final class RepositoryConfigReader {
-    static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline");
+    static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline", "root");
     private static final List<String> FOLDER_KEYS = List.of("match", "profile");
     private static final String EXAMPLE = "folders: [{match: rehab/, profile: profiles/rehab.yaml}]";
 
     private RepositoryConfigReader() {
+    }
+
+    /**
+     * Whether {@code file} says {@code root: true}. A file that cannot be read says nothing here: the run reads it in
+     * full and reports its problems at their place.
+     */
+    static boolean declaresRoot(Path file) {
+        try {
+            JsonNode root = ConfigDocument.read(file, file.toString()).root();
+            return root.isObject() && root.has(RepositoryLayout.ROOT_KEY)
+                    && root.get(RepositoryLayout.ROOT_KEY).isBoolean() && root.get(RepositoryLayout.ROOT_KEY).asBoolean();
+        } catch (ConfigProblem e) {
+            return false;
+        }
     }
 
     /** Reads {@code file}; {@code shown} is how messages name it (relative to the root where possible). */
@@ -32,6 +46,10 @@ public final class RepositoryConfigReader {
                     "start from: profile: hypertrophy");
         }
         doc.onlyKeys(root, "", KEYS, "the repository configuration");
+        if (root.has(RepositoryLayout.ROOT_KEY) && !root.get(RepositoryLayout.ROOT_KEY).isBoolean()) {
+            throw doc.problemAt("/root", "root must be true or false",
+                    "write root: true to stop the search for the repository root at this folder");
+        }
         Optional<ProfileRef> profile = Optional.empty();
         if (root.has("profile")) {
             profile = Optional.of(ref(doc, root.get("profile"), "/profile", base));

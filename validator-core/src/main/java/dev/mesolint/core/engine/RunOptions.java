@@ -1,6 +1,9 @@
 package dev.mesolint.core.engine;
 
+import dev.mesolint.core.config.RepositoryConfig;
+import dev.mesolint.core.config.RepositoryLayout;
 import dev.mesolint.core.finding.Severity;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -9,21 +12,39 @@ import java.util.Optional;
  * What a front end (command line, Maven plugin) was told, before the repository configuration is read. Each value
  * that is present overrides the configuration file; the catalogues are added after the file's own.
  *
- * @param root     paths in findings are shown relative to this folder; the configuration file is looked for here
- * @param config   an explicit configuration file; without it, {@code root/.mesolint.yaml} is used when it exists
- * @param profile  a profile name or team profile file for every programme, overriding all profile selection
- * @param baseline a baseline file to compare with, overriding the configuration's
+ * @param root        the repository root: paths in findings are shown relative to it
+ * @param config      an explicit configuration file, which wins over {@code foundConfig}
+ * @param profile     a profile name or team profile file for every programme, overriding all profile selection
+ * @param baseline    a baseline file to compare with, overriding the configuration's
+ * @param foundConfig the configuration file found by walking up from the checked paths ({@link RepositoryLayout})
  */
 public record RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
-        List<Path> catalogues, Optional<Path> baseline) {
+        List<Path> catalogues, Optional<Path> baseline, Optional<Path> foundConfig) {
 
     public RunOptions {
         root = root.toAbsolutePath().normalize();
         catalogues = List.copyOf(catalogues);
     }
 
+    /** Options for a known root: the configuration is {@code root/.mesolint.yaml} when it exists. */
+    public RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
+            List<Path> catalogues, Optional<Path> baseline) {
+        this(root, config, profile, failOn, catalogues, baseline, atRoot(root));
+    }
+
+    /** Options whose root and configuration come from walking up ({@link RepositoryLayout#discover}). */
+    public RunOptions(RepositoryLayout layout, Optional<Path> config, Optional<String> profile,
+            Optional<Severity> failOn, List<Path> catalogues, Optional<Path> baseline) {
+        this(layout.root(), config, profile, failOn, catalogues, baseline, layout.config());
+    }
+
     /** Nothing but the root. */
     public static RunOptions at(Path root) {
         return new RunOptions(root, Optional.empty(), Optional.empty(), Optional.empty(), List.of(), Optional.empty());
+    }
+
+    private static Optional<Path> atRoot(Path root) {
+        Path file = root.toAbsolutePath().normalize().resolve(RepositoryConfig.FILE_NAME);
+        return Files.isRegularFile(file) ? Optional.of(file) : Optional.empty();
     }
 }

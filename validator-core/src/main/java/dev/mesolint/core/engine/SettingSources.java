@@ -24,8 +24,9 @@ public final class SettingSources {
         String file = config.file().map(f -> ProgrammeFiles.display(given.root(), f)).orElse(null);
         List<String> lines = new ArrayList<>();
         lines.add("config = " + (given.config().isPresent() ? file + " (" + option.apply("config") + ")"
-                : file != null ? file + " (found in " + given.root() + ")"
-                : "none (no " + RepositoryConfig.FILE_NAME + " in " + given.root() + ")"));
+                : file != null ? file + " (the nearest " + RepositoryConfig.FILE_NAME + " above the checked paths)"
+                : "none (no " + RepositoryConfig.FILE_NAME + " between the checked paths and the root " + given.root()
+                        + ")"));
         lines.add("profile = " + pick(given.profile(), config.profile().map(p -> p.text()), "profile", file, option,
                 "named after each programme's goal")
                 + (config.folders().isEmpty() && config.goals().isEmpty() || given.profile().isPresent() ? ""

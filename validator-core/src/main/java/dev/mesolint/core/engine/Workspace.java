@@ -61,11 +61,24 @@ public final class Workspace {
         }
         List<ProfileChoice.FolderChoice> folders = new ArrayList<>();
         for (FolderRule f : config.folders()) {
-            folders.add(new ProfileChoice.FolderChoice(f::matches, profiles.nameOf(f.profile())));
+            folders.add(new ProfileChoice.FolderChoice(shown -> f.matches(fromConfigFolder(options, config, shown)),
+                    profiles.nameOf(f.profile())));
         }
         ProfileChoice choice = new ProfileChoice(forcedName, folders, goals, fallback);
         return new Workspace(options, config, new ProfileConfiguration(profiles, choice),
                 forcedName.or(() -> fallback).orElse(BuiltInProfiles.DEFAULT));
+    }
+
+    /**
+     * A file's shown path (relative to the root) made relative to the folder that holds the configuration file, which
+     * is what folder rules are written against; the same when the configuration sits in the root.
+     */
+    private static String fromConfigFolder(RunOptions options, RepositoryConfig config, String shown) {
+        Optional<Path> folder = config.file().map(Path::getParent);
+        if (folder.isEmpty() || folder.get().equals(options.root())) {
+            return shown;
+        }
+        return ProgrammeFiles.display(folder.get(), options.root().resolve(shown));
     }
 
     private static RepositoryConfig readConfig(RunOptions options) throws ConfigProblem {
@@ -78,9 +91,9 @@ public final class Workspace {
             }
             return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file));
         }
-        Path file = options.root().resolve(RepositoryConfig.FILE_NAME);
-        return Files.isRegularFile(file)
-                ? RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file))
+        Optional<Path> found = options.foundConfig().filter(Files::isRegularFile);
+        return found.isPresent()
+                ? RepositoryConfigReader.read(found.get(), ProgrammeFiles.display(options.root(), found.get()))
                 : RepositoryConfig.NONE;
     }
 

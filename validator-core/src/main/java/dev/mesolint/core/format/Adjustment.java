@@ -34,6 +34,9 @@ record Adjustment(double rirDelta, int setsDelta, int repsDelta, double loadPoin
     }
 
     RepTarget reps(RepTarget reps) {
+        if (reps.hasFloor() && repsDelta != 0) {
+            return RepTarget.atLeast(Math.max(1, Math.min(RepTarget.MAX_REPS, reps.min() + repsDelta)));
+        }
         if (reps.amrap() || repsDelta == 0) {
             return reps;
         }

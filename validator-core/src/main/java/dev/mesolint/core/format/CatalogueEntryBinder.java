@@ -6,6 +6,7 @@ import dev.mesolint.core.catalogue.MovementPattern;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.catalogue.Named;
 import dev.mesolint.core.catalogue.Region;
+import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.catalogue.Skill;
 import dev.mesolint.core.catalogue.Stability;
 import dev.mesolint.core.yaml.Pointers;
@@ -14,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import tools.jackson.databind.JsonNode;
 
@@ -44,7 +46,8 @@ final class CatalogueEntryBinder {
                 named(ExerciseKind.class, e.get("kind").asString()),
                 named(MovementPattern.class, e.get("pattern").asString()),
                 named(Stability.class, e.get("stability").asString()), named(Skill.class, e.get("skill").asString()),
-                muscles, regions, origin, ctx.at(pointer));
+                muscles, regions, e.path("ballistic").asBoolean(false),
+                Optional.ofNullable(BindContext.text(e, "role")).map(r -> named(Role.class, r)), origin, ctx.at(pointer));
     }
 
     /** Schema enums guarantee the name exists. */

@@ -54,6 +54,7 @@ public final class ProgrammeBinder {
         List<Waiver> fileWaivers = WaiverBinder.read(ctx, root, "", List.of(), true);
         List<WeekDraft> drafts = weeks(ctx, root.get("weeks"));
         var weeks = new WeekExpander(ctx).expand(drafts);
+        athlete = OneRepMaxSchedule.withTests(ctx, athlete, root.path("athlete").get("one-rep-max"), weeks);
         List<Violation> violations = ctx.violations();
         Optional<Programme> programme = violations.isEmpty()
                 ? Optional.of(new Programme(info, athlete, local, weeks, fileWaivers))
@@ -65,14 +66,7 @@ public final class ProgrammeBinder {
         if (node == null) {
             return Athlete.NONE;
         }
-        Map<String, Load.Absolute> maxes = new LinkedHashMap<>();
-        JsonNode oneRepMax = node.get("one-rep-max");
-        if (oneRepMax != null) {
-            for (Map.Entry<String, JsonNode> e : oneRepMax.properties()) {
-                ctx.value(oneRepMax, "/athlete/one-rep-max", e.getKey(), Load::parse)
-                        .ifPresent(l -> maxes.put(e.getKey(), (Load.Absolute) l));
-            }
-        }
+        Map<String, Load.Absolute> maxes = OneRepMaxSchedule.firstStated(ctx, node.get("one-rep-max"));
         List<AthleteConstraint> constraints = new ArrayList<>();
         JsonNode list = node.get("constraints");
         for (int i = 0; list != null && i < list.size(); i++) {

@@ -1,5 +1,6 @@
 package dev.mesolint.core.format;
 
+import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.SetPrescription;
@@ -7,6 +8,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Technique;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.value.Distance;
 import dev.mesolint.core.value.Durations;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.RepTarget;
@@ -14,6 +16,7 @@ import dev.mesolint.core.value.RirRange;
 import dev.mesolint.core.value.Rpe;
 import dev.mesolint.core.value.Tempo;
 import dev.mesolint.core.yaml.Pointers;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -70,14 +73,14 @@ final class SessionBinder {
         } else {
             int count = setsNode == null ? 1 : setsNode.asInt();
             for (int i = 1; i <= count; i++) {
-                // A technique written on the entry belongs to its last set only.
-                SetDefaults forSet = i == count ? defaults : defaults.withoutTechnique();
+                // A technique, and the "as many as possible" of 5+, written on the entry belong to its last set.
+                SetDefaults forSet = i == count ? defaults : defaults.beforeLastSet();
                 sets.add(forSet.toSet(i, ctx.at(pointer), waivers, ctx, pointer));
             }
         }
         JsonNode warmUp = e.get("warm-up");
         return new ExerciseWork(e.get("exercise").asString(), warmUp == null ? 0 : warmUp.asInt(), sets, ctx.at(pointer),
-                ctx.at(Pointers.child(pointer, "exercise")), waivers);
+                ctx.at(Pointers.child(pointer, "exercise")), waivers, role(e));
     }
 
     private Superset superset(JsonNode s, String pointer, List<Waiver> inherited) {
@@ -93,47 +96,82 @@ final class SessionBinder {
             SetDefaults defaults = defaults(item, itemPointer);
             List<SetPrescription> sets = new ArrayList<>();
             for (int round = 1; round <= rounds; round++) {
-                sets.add(defaults.toSet(round, ctx.at(itemPointer), itemWaivers, ctx, itemPointer));
+                SetDefaults forRound = round == rounds ? defaults : defaults.beforeLastSet();
+                sets.add(forRound.toSet(round, ctx.at(itemPointer), itemWaivers, ctx, itemPointer));
             }
             items.add(new ExerciseWork(item.get("exercise").asString(), 0, sets, ctx.at(itemPointer),
-                    ctx.at(Pointers.child(itemPointer, "exercise")), itemWaivers));
+                    ctx.at(Pointers.child(itemPointer, "exercise")), itemWaivers, role(item)));
         }
         return new Superset(rounds, ctx.value(s, pointer, "rest", Durations::parse), items, ctx.at(pointer), waivers);
     }
 
+    private static Optional<Role> role(JsonNode node) {
+        return Optional.ofNullable(BindContext.text(node, "role")).map(r -> CatalogueEntryBinder.named(Role.class, r));
+    }
+
     private SetDefaults defaults(JsonNode node, String pointer) {
-        return new SetDefaults(ctx.value(node, pointer, "reps", RepTarget::parse),
+        Optional<RepTarget> reps = ctx.value(node, pointer, "reps", RepTarget::parse);
+        Optional<Duration> hold = ctx.value(node, pointer, "hold", Durations::parseHold);
+        Optional<Distance> distance = ctx.value(node, pointer, "distance", Distance::parse);
+        boolean test = node.has("test");
+        int amounts = (node.has("reps") ? 1 : 0) + (node.has("hold") ? 1 : 0) + (node.has("distance") ? 1 : 0);
+        if (amounts > 1) {
+            ctx.reject(pointer, "a set is reps, a timed hold or a distance, not several of them",
+                    "keep one of reps: 8, hold: 30s or distance: 40m");
+        }
+        if (test && (node.has("hold") || node.has("distance"))) {
+            ctx.reject(Pointers.child(pointer, "test"), "a 1RM test is a single, not a hold or a carry",
+                    "write the test as reps: 1, test: 1rm");
+        }
+        if (test && reps.isPresent() && (reps.get().amrap() || reps.get().max() != 1)) {
+            ctx.reject(Pointers.child(pointer, "reps"), "a 1RM test is one rep, not " + reps.get(),
+                    "write reps: 1 with test: 1rm, or estimate the 1RM from a rep set without test:");
+        }
+        return new SetDefaults(test && reps.isEmpty() ? Optional.of(RepTarget.exactly(1)) : reps, hold, distance,
                 ctx.value(node, pointer, "rir", RirRange::parse), ctx.value(node, pointer, "rpe", Rpe::parse),
                 ctx.value(node, pointer, "load", Load::parse), ctx.value(node, pointer, "rest", Durations::parse),
                 ctx.value(node, pointer, "tempo", Tempo::parse),
                 Optional.ofNullable(BindContext.text(node, "technique"))
-                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)));
+                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)), test, amounts > 0);
     }
 
     /** Values written on an exercise entry that its sets inherit unless a set overrides them. */
-    private record SetDefaults(Optional<RepTarget> reps, Optional<RirRange> rir, Optional<Rpe> rpe, Optional<Load> load,
-            Optional<java.time.Duration> rest, Optional<Tempo> tempo, Optional<Technique> technique) {
+    private record SetDefaults(Optional<RepTarget> reps, Optional<Duration> hold, Optional<Distance> distance,
+            Optional<RirRange> rir, Optional<Rpe> rpe, Optional<Load> load, Optional<Duration> rest,
+            Optional<Tempo> tempo, Optional<Technique> technique, boolean test, boolean amountWritten) {
 
         SetDefaults override(SetDefaults set) {
-            // An effort stated on the set replaces every effort form of the entry, so that the two never mix.
+            // An effort stated on the set replaces every effort form of the entry, so that the two never mix;
+            // so does the amount of work: reps, a hold or a distance.
             boolean setStatesEffort = set.rir.isPresent() || set.rpe.isPresent() || set.load.isPresent();
-            return new SetDefaults(set.reps.or(() -> reps),
+            boolean setStatesAmount = set.reps.isPresent() || set.hold.isPresent() || set.distance.isPresent();
+            return new SetDefaults(setStatesAmount ? set.reps : reps, setStatesAmount ? set.hold : hold,
+                    setStatesAmount ? set.distance : distance,
                     setStatesEffort ? set.rir : rir, setStatesEffort ? set.rpe : rpe,
                     setStatesEffort ? set.load : load, set.rest.or(() -> rest),
-                    set.tempo.or(() -> tempo), set.technique.or(() -> technique));
+                    set.tempo.or(() -> tempo), set.technique.or(() -> technique), set.test || test,
+                    set.amountWritten || amountWritten);
         }
 
-        SetDefaults withoutTechnique() {
-            return new SetDefaults(reps, rir, rpe, load, rest, tempo, Optional.empty());
+        /** The entry's values for a set before its last: no technique, and {@code 5+} read as 5. */
+        SetDefaults beforeLastSet() {
+            return new SetDefaults(reps.map(RepTarget::withoutAmrap), hold, distance, rir, rpe, load, rest, tempo,
+                    Optional.empty(), test, amountWritten);
         }
 
         SetPrescription toSet(int number, dev.mesolint.core.source.Location location, List<Waiver> waivers,
                 BindContext ctx, String pointer) {
             RepTarget repTarget = reps.orElseGet(() -> {
-                ctx.reject(pointer, "the set has no reps", "add reps: 8, a range such as reps: 8-12, or reps: amrap");
+                // a bad value written for reps, hold or distance is reported once, where it is written
+                if (!amountWritten && !test) {
+                    ctx.reject(pointer, "the set has no reps",
+                            "add reps: 8, a range such as reps: 8-12, reps: 5+, reps: amrap, hold: 30s or distance: 40m");
+                }
+                // A hold or a carry is one continuous effort.
                 return RepTarget.exactly(1);
             });
-            return new SetPrescription(number, repTarget, rir, rpe, load, rest, tempo, technique, location, waivers);
+            return new SetPrescription(number, repTarget, rir, rpe, load, rest, tempo, technique, hold, distance, test,
+                    location, waivers);
         }
     }
 }

@@ -84,20 +84,21 @@ final class WeekExpander {
         List<SetPrescription> out = new ArrayList<>();
         for (int i = 0; i < sets.size(); i++) {
             SetPrescription p = sets.get(i);
-            out.add(new SetPrescription(i + 1, applies ? a.reps(p.reps()) : p.reps(), applies ? a.rir(p.rir()) : p.rir(),
-                    applies ? a.rpe(p.rpe()) : p.rpe(), applies ? a.load(p.load()) : p.load(), p.rest(), p.tempo(),
-                    p.technique(), p.location(), plus(p.waivers(), weekWaivers)));
+            // Holds, carries and 1RM tests have no rep count to change.
+            boolean repsApply = applies && !p.holdOrCarry() && !p.test();
+            out.add(p.with(i + 1, repsApply ? a.reps(p.reps()) : p.reps(), applies ? a.rir(p.rir()) : p.rir(),
+                    applies ? a.rpe(p.rpe()) : p.rpe(), applies ? a.load(p.load()) : p.load(), p.technique(),
+                    plus(p.waivers(), weekWaivers)));
         }
-        return new ExerciseWork(e.exerciseId(), e.warmUpSets(), out, e.location(), e.exerciseLocation(),
-                plus(e.waivers(), weekWaivers));
+        return e.with(out, plus(e.waivers(), weekWaivers));
     }
 
     /** Adds copies of the last plain set (before a final technique set) or removes sets from the end, keeping one. */
     private static void resize(List<SetPrescription> sets, int delta) {
         for (int i = 0; i < delta; i++) {
             SetPrescription last = sets.get(sets.size() - 1);
-            SetPrescription plain = new SetPrescription(last.number(), last.reps(), last.rir(), last.rpe(), last.load(),
-                    last.rest(), last.tempo(), Optional.empty(), last.location(), last.waivers());
+            SetPrescription plain = last.with(last.number(), last.reps(), last.rir(), last.rpe(), last.load(),
+                    Optional.empty(), last.waivers());
             sets.add(last.technique().isPresent() ? sets.size() - 1 : sets.size(), plain);
         }
         for (int i = 0; i > delta && sets.size() > 1; i--) {

@@ -1,25 +1,42 @@
 package dev.mesolint.core.model;
 
 /**
- * Diminishing returns within a session: S(x) = ln(1 + x/a) / ln(1 + 1/a), x the summed fatigue-adjusted stimulus.
+ * Diminishing returns, in two steps. Within a session, effective sets level off towards a plateau:
+ * g(x) = x / (1 + (x/c)^m)^(1/m), x the session's summed fatigue-adjusted stimulus (about x for small x, never above
+ * c). Over the week, the sessions' effective sets add up and W = (sum g)^p.
  *
- * <p>S(1) = 1, so the result stays in units of one fresh hard set; with a = 0.25, six fresh hard sets give
- * exactly 2 (1 + 6/a = (1 + 1/a)^2 when a = 1/4): doubling the growth of one set takes five more. S rises with x
- * and bends down (concave), so an added set never lowers the result.
+ * <p>W(1) = 1, so the weekly stimulus stays in units of one fresh hard set. A power law has no scale: six times the
+ * sets give 6^p = 2 times the stimulus (p = ln 2 / ln 6) at one session a week or five, which is what the
+ * dose-response data say; summing the sets over the week before the curve is what makes the same weekly sets
+ * split over more sessions give about the same stimulus (Schoenfeld, Grgic &amp; Krieger 2019). Both steps rise
+ * with x, so an added set never lowers the result.
  */
 public final class DoseResponse {
-    private final double scale;
-    private final double norm;
+    private final double plateau;
+    private final double sharpness;
+    private final double exponent;
 
     public DoseResponse(ModelParameters params) {
-        this.scale = params.diminishingReturnsScale();
-        this.norm = Math.log1p(1 / scale);
+        this.plateau = params.sessionPlateauSets();
+        this.sharpness = params.sessionPlateauSharpness();
+        this.exponent = params.weeklyDoseExponent();
     }
 
-    public double sessionStimulus(double summedStimulus) {
-        if (summedStimulus < 0) {
-            throw new IllegalArgumentException("stimulus cannot be negative, was " + summedStimulus);
+    /** A session's effective sets, g(x), from its summed stimulus x. */
+    public double sessionEffective(double summedStimulus) {
+        requireNonNegative(summedStimulus);
+        return summedStimulus / Math.pow(1 + Math.pow(summedStimulus / plateau, sharpness), 1 / sharpness);
+    }
+
+    /** The weekly stimulus, W = (sum of the sessions' effective sets)^p. */
+    public double weeklyStimulus(double effectiveSets) {
+        requireNonNegative(effectiveSets);
+        return Math.pow(effectiveSets, exponent);
+    }
+
+    private static void requireNonNegative(double value) {
+        if (value < 0) {
+            throw new IllegalArgumentException("stimulus cannot be negative, was " + value);
         }
-        return Math.log1p(summedStimulus / scale) / norm;
     }
 }

@@ -2,6 +2,7 @@ package dev.mesolint.core.model;
 
 import dev.mesolint.core.programme.Athlete;
 import dev.mesolint.core.programme.SetPrescription;
+import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.LoadUnit;
 import dev.mesolint.core.value.RepTarget;
 import dev.mesolint.core.value.RirRange;
@@ -28,12 +29,24 @@ public final class EffortResolver {
      * @param units      the programme's unit, for the absolute load
      */
     public Effort resolve(SetPrescription set, String exerciseId, Athlete athlete, LoadUnit units) {
-        ResolvedLoad load = LoadResolver.resolve(set.load(), athlete.oneRepMax(exerciseId), units);
-        OptionalDouble repsToFailure = load.fraction().isPresent()
+        return resolve(set, exerciseId, false, athlete, units);
+    }
+
+    /**
+     * @param ballistic a ballistic or Olympic lift: a set ends with a technical miss, so no reps in reserve are
+     *                  inferred from its load (only a stated RIR or RPE gives its effort)
+     */
+    public Effort resolve(SetPrescription set, String exerciseId, boolean ballistic, Athlete athlete, LoadUnit units) {
+        // A 1RM test without a load is a single at 100% of the 1RM being tested.
+        Optional<Load> written = set.test() && set.load().isEmpty() ? Optional.of(new Load.Relative(1.0)) : set.load();
+        ResolvedLoad load = LoadResolver.resolve(written, athlete.oneRepMax(exerciseId), units);
+        OptionalDouble repsToFailure = load.fraction().isPresent() && !ballistic
                 ? OptionalDouble.of(params.oneRepMaxRelation().repsToFailure(load.fraction().getAsDouble()))
                 : OptionalDouble.empty();
         RepTarget target = set.reps();
-        double reps = target.amrap() ? repsToFailure.orElse(params.amrapDefaultReps()) : target.midpoint();
+        // 5+ is an AMRAP with a floor: at least the stated minimum
+        double reps = target.amrap() ? Math.max(target.min(), repsToFailure.orElse(params.amrapDefaultReps()))
+                : target.midpoint();
         double repsUpper = target.amrap() ? reps : target.max();
 
         OptionalDouble rpeAsRir = set.rpe().isPresent()

@@ -1,11 +1,13 @@
 package dev.mesolint.core.model;
 
+import dev.mesolint.core.catalogue.Muscle;
+
 /**
  * Residual fatigue a bout of reps leaves in a muscle (0 = fresh, towards 1 = nothing left), and its recovery.
  *
  * <p>The drive grows with reps (reps past the high-rep threshold count extra), falls off exponentially with reps in
- * reserve, and is larger for compound lifts; fatigue = 1 - exp(-drive) keeps it below 1. Recovery is exponential
- * with a single time constant. A project convention calibrated on the check values in docs/model.md.
+ * reserve, and is larger for compound lifts; fatigue = 1 - exp(-drive) keeps it below 1. Recovery is exponential,
+ * slower for the large lower-body muscles. A project convention calibrated on the check values in docs/model.md.
  */
 public final class FatigueModel {
     private final ModelParameters params;
@@ -25,8 +27,21 @@ public final class FatigueModel {
         return 1 - Math.exp(-drive);
     }
 
-    /** Fatigue left after {@code seconds} of recovery. */
-    public double remaining(double fatigue, double seconds) {
-        return fatigue * Math.exp(-seconds / params.recoveryTimeConstantSeconds());
+    /**
+     * Fatigue left in {@code muscle} after {@code seconds} of recovery. The large lower-body muscles recover
+     * {@code lowerBodyRecoveryFactor} times slower, which is why rest matters most after squats, hinges and lunges
+     * (Schoenfeld et al. 2016 saw the largest rest effect in the thigh).
+     */
+    public double remaining(Muscle muscle, double fatigue, double seconds) {
+        double tau = params.recoveryTimeConstantSeconds()
+                * (isLargeLowerBody(muscle) ? params.lowerBodyRecoveryFactor() : 1);
+        return fatigue * Math.exp(-seconds / tau);
+    }
+
+    private static boolean isLargeLowerBody(Muscle muscle) {
+        return switch (muscle) {
+            case QUADRICEPS, GLUTES, HAMSTRINGS, ADDUCTORS -> true;
+            default -> false;
+        };
     }
 }

@@ -34,7 +34,7 @@ final class FatigueState {
         }
         EnumMap<Muscle, Double> next = new EnumMap<>(Muscle.class);
         levels.forEach((muscle, level) -> {
-            double left = model.remaining(level, seconds);
+            double left = model.remaining(muscle, level, seconds);
             if (left > NEGLIGIBLE) {
                 next.put(muscle, left);
             }

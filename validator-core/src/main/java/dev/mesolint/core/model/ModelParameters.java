@@ -13,21 +13,30 @@ import java.util.Objects;
  * @param hardSetMaxRir             most reps in reserve a hard set may leave; 3 (0..5)
  * @param amrapDefaultReps          reps assumed for an AMRAP set without a load: the model's reference set; 8 (1..50)
  * @param stimulatingRepsCeiling    K: the last K reps before failure stimulate growth; 5 (4..6)
+ * @param stimulatingRepsTail       L: beyond K - L reps in reserve the stimulating reps fall off as L e^(-(r-K+L)/L)
+ *                                  instead of reaching 0; 1.5 (0.5..1.6)
  * @param recruitmentFloor          share of the motor-unit pool with no growth potential left; 0.3 (0..0.6)
  * @param fatiguePerRep             fatigue drive of one rep at failure; 0.03 (0.005..0.1)
  * @param proximityDecay            how fast fatigue drive falls per rep in reserve; 0.3 (0..1)
  * @param highRepThreshold          reps from which each further rep counts extra; 15 (8..30)
  * @param highRepExtraWeight        extra weight of each rep past the threshold; 1.0 (0..3)
  * @param compoundFatigueFactor     fatigue multiplier for compound exercises; 1.3 (1..2)
+ * @param lowerBodyRecoveryFactor   how many times slower quadriceps, glutes, hamstrings and adductors recover; 1.25
+ *                                  (1..2)
  * @param recoveryTimeConstantSeconds time for residual fatigue to fall to 1/e (37%); 90 s (20..600)
  * @param techniqueFatigueFactor    fatigue multiplier for drop-set and rest-pause mini-sets; 1.5 (1..3)
- * @param dropSetExtraReps          reps of a drop set's continuation at the lower load; 6 (1..20)
- * @param dropSetLoadDrop           share of the load taken off for the drop; 0.2 (0.05..0.5)
+ * @param dropSets                  drops a drop set makes, each to failure; 2 (1..4)
+ * @param dropSetExtraReps          reps of each drop at its lower load; 6 (1..20)
+ * @param dropSetLoadDrop           share of the load taken off at each drop; 0.2 (0.05..0.5)
  * @param dropSetPauseSeconds       time to change the load for the drop; 10 s (0..60)
  * @param restPauseMiniSets         mini-sets after the main set of a rest-pause set; 2 (1..5)
  * @param restPauseMiniSetReps      reps of each rest-pause mini-set; 3 (1..10)
  * @param restPausePauseSeconds     pause before each rest-pause mini-set; 20 s (5..60)
- * @param diminishingReturnsScale   a in S = ln(1 + x/a) / ln(1 + 1/a); 0.25 (0.05..5)
+ * @param sessionPlateauSets        c: a session's effective sets level off towards c, g(x) = x / (1 + (x/c)^m)^(1/m);
+ *                                  11 (6..20)
+ * @param sessionPlateauSharpness   m: how sharply a session's effective sets level off; 3 (1..8)
+ * @param weeklyDoseExponent        p: weekly stimulus = (sum of the sessions' effective sets)^p; ln 2 / ln 6 = 0.387
+ *                                  (0.2..0.8): six sets twice one, at any number of sessions
  * @param defaultRestSeconds        rest after a set that states none; 120 s (15..600)
  * @param supersetChangeoverSeconds pause between items of a superset round that states none; 15 s (0..120)
  * @param defaultRepSeconds         time of one rep without a tempo; 4 s (1..10)
@@ -47,21 +56,26 @@ public record ModelParameters(
         double hardSetMaxRir,
         double amrapDefaultReps,
         double stimulatingRepsCeiling,
+        double stimulatingRepsTail,
         double recruitmentFloor,
         double fatiguePerRep,
         double proximityDecay,
         double highRepThreshold,
         double highRepExtraWeight,
         double compoundFatigueFactor,
+        double lowerBodyRecoveryFactor,
         double recoveryTimeConstantSeconds,
         double techniqueFatigueFactor,
+        int dropSets,
         double dropSetExtraReps,
         double dropSetLoadDrop,
         double dropSetPauseSeconds,
         int restPauseMiniSets,
         double restPauseMiniSetReps,
         double restPausePauseSeconds,
-        double diminishingReturnsScale,
+        double sessionPlateauSets,
+        double sessionPlateauSharpness,
+        double weeklyDoseExponent,
         double defaultRestSeconds,
         double supersetChangeoverSeconds,
         double defaultRepSeconds,
@@ -83,21 +97,26 @@ public record ModelParameters(
         within("hardSetMaxRir", hardSetMaxRir, 0, 5);
         within("amrapDefaultReps", amrapDefaultReps, 1, 50);
         within("stimulatingRepsCeiling", stimulatingRepsCeiling, 4, 6);
+        within("stimulatingRepsTail", stimulatingRepsTail, 0.5, 1.6);
         within("recruitmentFloor", recruitmentFloor, 0, 0.6);
         within("fatiguePerRep", fatiguePerRep, 0.005, 0.1);
         within("proximityDecay", proximityDecay, 0, 1);
         within("highRepThreshold", highRepThreshold, 8, 30);
         within("highRepExtraWeight", highRepExtraWeight, 0, 3);
         within("compoundFatigueFactor", compoundFatigueFactor, 1, 2);
+        within("lowerBodyRecoveryFactor", lowerBodyRecoveryFactor, 1, 2);
         within("recoveryTimeConstantSeconds", recoveryTimeConstantSeconds, 20, 600);
         within("techniqueFatigueFactor", techniqueFatigueFactor, 1, 3);
+        within("dropSets", dropSets, 1, 4);
         within("dropSetExtraReps", dropSetExtraReps, 1, 20);
         within("dropSetLoadDrop", dropSetLoadDrop, 0.05, 0.5);
         within("dropSetPauseSeconds", dropSetPauseSeconds, 0, 60);
         within("restPauseMiniSets", restPauseMiniSets, 1, 5);
         within("restPauseMiniSetReps", restPauseMiniSetReps, 1, 10);
         within("restPausePauseSeconds", restPausePauseSeconds, 5, 60);
-        within("diminishingReturnsScale", diminishingReturnsScale, 0.05, 5);
+        within("sessionPlateauSets", sessionPlateauSets, 6, 20);
+        within("sessionPlateauSharpness", sessionPlateauSharpness, 1, 8);
+        within("weeklyDoseExponent", weeklyDoseExponent, 0.2, 0.8);
         within("defaultRestSeconds", defaultRestSeconds, 15, 600);
         within("supersetChangeoverSeconds", supersetChangeoverSeconds, 0, 120);
         within("defaultRepSeconds", defaultRepSeconds, 1, 10);
@@ -140,21 +159,27 @@ public record ModelParameters(
         private double hardSetMaxRir = 3;
         private double amrapDefaultReps = 8;
         private double stimulatingRepsCeiling = 5;
+        private double stimulatingRepsTail = 1.5;
         private double recruitmentFloor = 0.3;
         private double fatiguePerRep = 0.03;
         private double proximityDecay = 0.3;
         private double highRepThreshold = 15;
         private double highRepExtraWeight = 1.0;
         private double compoundFatigueFactor = 1.3;
+        private double lowerBodyRecoveryFactor = 1.25;
         private double recoveryTimeConstantSeconds = 90;
         private double techniqueFatigueFactor = 1.5;
+        private int dropSets = 2;
         private double dropSetExtraReps = 6;
         private double dropSetLoadDrop = 0.2;
         private double dropSetPauseSeconds = 10;
         private int restPauseMiniSets = 2;
         private double restPauseMiniSetReps = 3;
         private double restPausePauseSeconds = 20;
-        private double diminishingReturnsScale = 0.25;
+        private double sessionPlateauSets = 8.5;
+        private double sessionPlateauSharpness = 3;
+        /** ln 2 / ln 6: six sets give twice the stimulus of one. */
+        private double weeklyDoseExponent = Math.log(2) / Math.log(6);
         private double defaultRestSeconds = 120;
         private double supersetChangeoverSeconds = 15;
         private double defaultRepSeconds = 4;
@@ -177,21 +202,26 @@ public record ModelParameters(
             hardSetMaxRir = p.hardSetMaxRir;
             amrapDefaultReps = p.amrapDefaultReps;
             stimulatingRepsCeiling = p.stimulatingRepsCeiling;
+            stimulatingRepsTail = p.stimulatingRepsTail;
             recruitmentFloor = p.recruitmentFloor;
             fatiguePerRep = p.fatiguePerRep;
             proximityDecay = p.proximityDecay;
             highRepThreshold = p.highRepThreshold;
             highRepExtraWeight = p.highRepExtraWeight;
             compoundFatigueFactor = p.compoundFatigueFactor;
+            lowerBodyRecoveryFactor = p.lowerBodyRecoveryFactor;
             recoveryTimeConstantSeconds = p.recoveryTimeConstantSeconds;
             techniqueFatigueFactor = p.techniqueFatigueFactor;
+            dropSets = p.dropSets;
             dropSetExtraReps = p.dropSetExtraReps;
             dropSetLoadDrop = p.dropSetLoadDrop;
             dropSetPauseSeconds = p.dropSetPauseSeconds;
             restPauseMiniSets = p.restPauseMiniSets;
             restPauseMiniSetReps = p.restPauseMiniSetReps;
             restPausePauseSeconds = p.restPausePauseSeconds;
-            diminishingReturnsScale = p.diminishingReturnsScale;
+            sessionPlateauSets = p.sessionPlateauSets;
+            sessionPlateauSharpness = p.sessionPlateauSharpness;
+            weeklyDoseExponent = p.weeklyDoseExponent;
             defaultRestSeconds = p.defaultRestSeconds;
             supersetChangeoverSeconds = p.supersetChangeoverSeconds;
             defaultRepSeconds = p.defaultRepSeconds;
@@ -231,6 +261,11 @@ public record ModelParameters(
             return this;
         }
 
+        public Builder stimulatingRepsTail(double v) {
+            stimulatingRepsTail = v;
+            return this;
+        }
+
         public Builder recruitmentFloor(double v) {
             recruitmentFloor = v;
             return this;
@@ -261,6 +296,11 @@ public record ModelParameters(
             return this;
         }
 
+        public Builder lowerBodyRecoveryFactor(double v) {
+            lowerBodyRecoveryFactor = v;
+            return this;
+        }
+
         public Builder recoveryTimeConstantSeconds(double v) {
             recoveryTimeConstantSeconds = v;
             return this;
@@ -268,6 +308,11 @@ public record ModelParameters(
 
         public Builder techniqueFatigueFactor(double v) {
             techniqueFatigueFactor = v;
+            return this;
+        }
+
+        public Builder dropSets(int v) {
+            dropSets = v;
             return this;
         }
 
@@ -301,8 +346,18 @@ public record ModelParameters(
             return this;
         }
 
-        public Builder diminishingReturnsScale(double v) {
-            diminishingReturnsScale = v;
+        public Builder sessionPlateauSets(double v) {
+            sessionPlateauSets = v;
+            return this;
+        }
+
+        public Builder sessionPlateauSharpness(double v) {
+            sessionPlateauSharpness = v;
+            return this;
+        }
+
+        public Builder weeklyDoseExponent(double v) {
+            weeklyDoseExponent = v;
             return this;
         }
 
@@ -368,13 +423,14 @@ public record ModelParameters(
 
         public ModelParameters build() {
             return new ModelParameters(oneRepMaxRelation, effortToleranceReps, hardSetMaxRir, amrapDefaultReps,
-                    stimulatingRepsCeiling, recruitmentFloor, fatiguePerRep, proximityDecay, highRepThreshold,
-                    highRepExtraWeight, compoundFatigueFactor, recoveryTimeConstantSeconds, techniqueFatigueFactor,
-                    dropSetExtraReps, dropSetLoadDrop, dropSetPauseSeconds, restPauseMiniSets, restPauseMiniSetReps,
-                    restPausePauseSeconds, diminishingReturnsScale, defaultRestSeconds, supersetChangeoverSeconds,
-                    defaultRepSeconds, warmUpSetMinutes, exerciseChangeoverMinutes, hardSessionMinSets,
-                    acuteChronicWeeks, intensityZone1From, intensityZone2From, intensityZone3From,
-                    intensityZone4From, heavyRepsFrom);
+                    stimulatingRepsCeiling, stimulatingRepsTail, recruitmentFloor, fatiguePerRep, proximityDecay,
+                    highRepThreshold, highRepExtraWeight, compoundFatigueFactor, lowerBodyRecoveryFactor,
+                    recoveryTimeConstantSeconds, techniqueFatigueFactor, dropSets, dropSetExtraReps, dropSetLoadDrop,
+                    dropSetPauseSeconds, restPauseMiniSets, restPauseMiniSetReps, restPausePauseSeconds,
+                    sessionPlateauSets, sessionPlateauSharpness, weeklyDoseExponent, defaultRestSeconds,
+                    supersetChangeoverSeconds, defaultRepSeconds, warmUpSetMinutes, exerciseChangeoverMinutes,
+                    hardSessionMinSets, acuteChronicWeeks, intensityZone1From, intensityZone2From,
+                    intensityZone3From, intensityZone4From, heavyRepsFrom);
         }
     }
 }

@@ -6,7 +6,8 @@ package dev.mesolint.core.model;
  * @param hardSets          credited hard sets
  * @param stimulatingReps   credited stimulating reps of all working sets
  * @param rawStimulus       credited, fatigue-adjusted stimulus summed over the sets, before diminishing returns
- * @param stimulus          {@code rawStimulus} after the session's diminishing returns
+ * @param stimulus          the session's effective sets: {@code rawStimulus} levelled off towards the per-session
+ *                          plateau (about {@code rawStimulus} up to some eight sets); the week adds these up
  * @param unknownEffortSets credited sets whose effort nothing states
  */
 public record MuscleSession(double hardSets, double stimulatingReps, double rawStimulus, double stimulus,

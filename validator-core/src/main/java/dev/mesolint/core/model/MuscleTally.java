@@ -8,7 +8,7 @@ final class MuscleTally {
     double unknownEffortSets;
 
     MuscleSession toSession(DoseResponse dose) {
-        return new MuscleSession(hardSets, stimulatingReps, rawStimulus, dose.sessionStimulus(rawStimulus),
+        return new MuscleSession(hardSets, stimulatingReps, rawStimulus, dose.sessionEffective(rawStimulus),
                 unknownEffortSets);
     }
 }

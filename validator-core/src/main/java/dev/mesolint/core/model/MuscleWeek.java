@@ -7,7 +7,8 @@ import java.util.List;
  *
  * @param hardSets          credited hard sets (1 per prime-mover set, 0.5 per synergist set)
  * @param stimulatingReps   credited stimulating reps of all working sets
- * @param stimulus          sum of the sessions' stimulus after diminishing returns, in fresh-hard-set units
+ * @param stimulus          the weekly dose-response of the sessions' effective sets, (sum)^p, in units of one
+ *                          fresh hard set a week
  * @param hardSessions      sessions with at least {@code hardSessionMinSets} credited hard sets for the muscle
  * @param gapsHours         hours between consecutive hard sessions within the week (24 per day; the wrap to the
  *                          next week is not counted)

@@ -50,12 +50,16 @@ final class SessionCalculator {
 
         for (PlannedSet planned : planner.plan(session)) {
             String id = planned.work().exerciseId();
-            Effort effort = resolver.resolve(planned.set(), id, athlete, units);
             Optional<Exercise> exercise = catalogue.find(id);
+            Effort effort = resolver.resolve(planned.set(), id, exercise.map(Exercise::ballistic).orElse(false),
+                    athlete, units);
+            // A hold or a carry counts as time only (docs/model.md): no stimulating reps, not a hard set.
+            boolean holdOrCarry = planned.set().holdOrCarry();
             // The effort is unknown or the exercise is: the set takes time but adds no stimulus or fatigue.
-            boolean modelled = effort.known() && exercise.isPresent();
+            boolean modelled = effort.known() && exercise.isPresent() && !holdOrCarry;
             List<Bout> bouts = techniques.expand(effort.reps(), effort.rir().orElse(0), planned.set().technique());
-            double repSeconds = planned.set().tempo().map(Tempo::secondsPerRep).orElse(params.defaultRepSeconds());
+            double repSeconds = holdOrCarry ? holdOrCarrySeconds(planned.set())
+                    : planned.set().tempo().map(Tempo::secondsPerRep).orElse(params.defaultRepSeconds());
 
             state = state.recover(recoveryBefore + planned.setupSecondsBefore(), fatigueModel);
             seconds += planned.setupSecondsBefore();
@@ -69,7 +73,9 @@ final class SessionCalculator {
                     double sr = stimulusModel.stimulatingReps(bout.reps(), bout.rir());
                     stimulatingReps += sr;
                     for (Map.Entry<Muscle, Double> credit : exercise.get().muscles().entrySet()) {
-                        double recruitment = 1 - state.of(credit.getKey());
+                        // A mini-set goes on with the units the set has already recruited: its fatigue shortens
+                        // it (fewer reps), it does not lower the recruitment its reps reach (docs/model.md).
+                        double recruitment = 1 - atStart.of(credit.getKey());
                         muscleStimulus.merge(credit.getKey(),
                                 credit.getValue() * stimulusModel.stimulus(sr, recruitment), Double::sum);
                     }
@@ -83,7 +89,7 @@ final class SessionCalculator {
             seconds += planned.restAfterSeconds();
             recoveryBefore = planned.restAfterSeconds();
 
-            if (exercise.isEmpty()) {
+            if (exercise.isEmpty() || holdOrCarry) {
                 continue;
             }
             OptionalDouble setVolume = volumeLoad(effort, bouts);
@@ -97,6 +103,15 @@ final class SessionCalculator {
         tallies.forEach((muscle, tally) -> muscles.put(muscle, tally.toSession(dose)));
         return new SessionMetrics(session.day(), session.name(), session.location(), seconds / 60, muscles, sets,
                 volumeLoad, strength.perSession(sets));
+    }
+
+    /** A loaded carry is walked at about 1 m/s (from memory; a brisk walk under load). */
+    private static final double CARRY_METRES_PER_SECOND = 1.0;
+
+    /** The duration of a hold, or a carry's distance at walking pace: the set is one effort of this length. */
+    private static double holdOrCarrySeconds(dev.mesolint.core.programme.SetPrescription set) {
+        return set.hold().map(dev.mesolint.core.value.Durations::seconds)
+                .orElseGet(() -> set.distance().orElseThrow().metres() / CARRY_METRES_PER_SECOND);
     }
 
     private static void tally(Map<Muscle, MuscleTally> tallies, Exercise exercise, Effort effort, boolean hard,

@@ -37,7 +37,7 @@ public record SessionMetrics(int day, String name, Location location, double min
         return m == null ? 0 : m.hardSets();
     }
 
-    /** Stimulus for a muscle after diminishing returns; 0 when the session does not train it. */
+    /** A muscle's effective sets in this session (after the per-session plateau); 0 when it is not trained. */
     public double stimulus(Muscle muscle) {
         MuscleSession m = muscles.get(muscle);
         return m == null ? 0 : m.stimulus();

@@ -8,16 +8,25 @@ package dev.mesolint.core.model;
  */
 public final class StimulusModel {
     private final double ceiling;
+    private final double tail;
     private final double floor;
 
     public StimulusModel(ModelParameters params) {
         this.ceiling = params.stimulatingRepsCeiling();
+        this.tail = params.stimulatingRepsTail();
         this.floor = params.recruitmentFloor();
     }
 
-    /** clamp(K - r, 0, n): only the last K reps before failure count, and never more reps than were done. */
+    /**
+     * About clamp(K - r, 0, n): only the last K reps before failure count fully, and never more reps than were done.
+     * Beyond K - L in reserve the count leaves the straight line K - r for the tail L e^(-(r - K + L)/L), which meets
+     * it with the same value and slope and then falls smoothly, staying above 0: sets far from failure still give a
+     * little (Robinson et al. 2024). With L = 1.5 the line holds exactly to r = 3.5 and within 0.08 rep at r = 4.
+     */
     public double stimulatingReps(double reps, double rir) {
-        return Math.max(0, Math.min(ceiling - rir, reps));
+        double bend = ceiling - tail;
+        double count = rir <= bend ? ceiling - rir : tail * Math.exp(-(rir - bend) / tail);
+        return Math.max(0, Math.min(count, reps));
     }
 
     /** Share of the still-growable pool reached: (rho - floor) / (1 - floor), never below 0. */

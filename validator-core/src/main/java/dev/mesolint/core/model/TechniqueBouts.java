@@ -8,7 +8,8 @@ import java.util.Optional;
 /**
  * Expands a set into its bouts: the set itself, then the mini-sets its technique adds, each to failure.
  *
- * <p>A drop set continues after a short load change with {@code dropSetExtraReps} at a lighter load; a rest-pause
+ * <p>A drop set continues {@code dropSets} times after a short load change, each time with {@code dropSetExtraReps}
+ * at a load {@code dropSetLoadDrop} lighter than the one before; a rest-pause
  * set adds {@code restPauseMiniSets} mini-sets of {@code restPauseMiniSetReps} after a short pause. Mini-sets leave
  * {@code techniqueFatigueFactor} times the usual fatigue: they are done with almost no recovery.
  */
@@ -26,8 +27,14 @@ final class TechniqueBouts {
             return bouts;
         }
         switch (technique.get()) {
-            case DROP_SET -> bouts.add(new Bout(params.dropSetExtraReps(), 0, params.dropSetPauseSeconds(),
-                    params.techniqueFatigueFactor(), 1 - params.dropSetLoadDrop()));
+            case DROP_SET -> {
+                double load = 1;
+                for (int i = 0; i < params.dropSets(); i++) {
+                    load *= 1 - params.dropSetLoadDrop();
+                    bouts.add(new Bout(params.dropSetExtraReps(), 0, params.dropSetPauseSeconds(),
+                            params.techniqueFatigueFactor(), load));
+                }
+            }
             case REST_PAUSE -> {
                 for (int i = 0; i < params.restPauseMiniSets(); i++) {
                     bouts.add(new Bout(params.restPauseMiniSetReps(), 0, params.restPausePauseSeconds(),

@@ -21,17 +21,20 @@ final class WeekCalculator {
     private final ModelParameters params;
     private final SessionCalculator sessions;
     private final StrengthFigures strength;
+    private final DoseResponse dose;
 
     WeekCalculator(ModelParameters params) {
         this.params = params;
         this.sessions = new SessionCalculator(params);
         this.strength = new StrengthFigures(params);
+        this.dose = new DoseResponse(params);
     }
 
     WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
         List<SessionMetrics> computed = week.sessions().stream()
                 .sorted(Comparator.comparingInt(Session::day))
-                .map(s -> sessions.compute(s, catalogue, athlete, units))
+                // each session sees the 1RMs in force for it (stated per week, or unknown after a test)
+                .map(s -> sessions.compute(s, catalogue, athlete.atSession(week.number(), s.day()), units))
                 .toList();
         Set<Muscle> trained = EnumSet.noneOf(Muscle.class);
         computed.forEach(s -> trained.addAll(s.muscles().keySet()));
@@ -47,7 +50,7 @@ final class WeekCalculator {
     private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {
         double hardSets = 0;
         double stimulatingReps = 0;
-        double stimulus = 0;
+        double effectiveSets = 0;
         double unknown = 0;
         List<Integer> hardDays = new ArrayList<>();
         for (SessionMetrics session : computed) {
@@ -57,7 +60,7 @@ final class WeekCalculator {
             }
             hardSets += m.hardSets();
             stimulatingReps += m.stimulatingReps();
-            stimulus += m.stimulus();
+            effectiveSets += m.stimulus();
             unknown += m.unknownEffortSets();
             if (m.hardSets() >= params.hardSessionMinSets()) {
                 hardDays.add(session.day());
@@ -67,6 +70,7 @@ final class WeekCalculator {
         for (int i = 1; i < hardDays.size(); i++) {
             gaps.add((hardDays.get(i) - hardDays.get(i - 1)) * HOURS_PER_DAY);
         }
-        return new MuscleWeek(hardSets, stimulatingReps, stimulus, hardDays.size(), gaps, unknown);
+        return new MuscleWeek(hardSets, stimulatingReps, dose.weeklyStimulus(effectiveSets), hardDays.size(), gaps,
+                unknown);
     }
 }

@@ -1,18 +1,38 @@
 package dev.mesolint.core.programme;
 
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.source.Location;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * An exercise with its working sets, as done in a session.
  *
  * @param exerciseLocation the {@code exercise:} value, where unknown-exercise findings point
+ * @param role             the {@code role:} written on the entry; empty = the catalogue's default
  */
 public record ExerciseWork(String exerciseId, int warmUpSets, List<SetPrescription> sets, Location location,
-        Location exerciseLocation, List<Waiver> waivers) implements WorkItem {
+        Location exerciseLocation, List<Waiver> waivers, Optional<Role> role) implements WorkItem {
 
     public ExerciseWork {
         sets = List.copyOf(sets);
         waivers = List.copyOf(waivers);
+    }
+
+    /** An entry that states no role. */
+    public ExerciseWork(String exerciseId, int warmUpSets, List<SetPrescription> sets, Location location,
+            Location exerciseLocation, List<Waiver> waivers) {
+        this(exerciseId, warmUpSets, sets, location, exerciseLocation, waivers, Optional.empty());
+    }
+
+    /** The role in this session: as written, else the catalogue entry's default ({@link Exercise#defaultRole()}). */
+    public Role role(Exercise exercise) {
+        return role.orElseGet(exercise::defaultRole);
+    }
+
+    /** This entry with other sets and waivers (what a repeated week changes). */
+    public ExerciseWork with(List<SetPrescription> newSets, List<Waiver> newWaivers) {
+        return new ExerciseWork(exerciseId, warmUpSets, newSets, location, exerciseLocation, newWaivers, role);
     }
 }

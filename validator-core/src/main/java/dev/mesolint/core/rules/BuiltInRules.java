@@ -31,6 +31,7 @@ public final class BuiltInRules {
                 new RecoveryGapRule(),
                 new SessionTimeRule(),
                 new VolumeSpikeRule(),
+                new IntensityJumpRule(),
                 new NoDeloadRule(),
                 new UnstableSurfaceRule(),
                 new NoviceHeavyComplexRule(),

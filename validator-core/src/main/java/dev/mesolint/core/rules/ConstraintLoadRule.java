@@ -126,7 +126,7 @@ public final class ConstraintLoadRule implements Rule {
                         .filter(l -> !l.toString().endsWith("%")).map(l -> " (" + l + ")").orElse("");
         String fix;
         if (!hit.inferred()) {
-            fix = "load: " + Texts.loadStepDown(cap) + " or lighter";
+            fix = cappedLoadFix(set, relation, cap);
         } else {
             // The lightest effort that stays within the cap: the reps to failure the capped load allows.
             int effort = (int) Math.ceil(relation.repsToFailure(cap) - ROUNDING);
@@ -138,6 +138,24 @@ public final class ConstraintLoadRule implements Rule {
         }
         group.add(found, context.severity(), group.label() + ": load " + load + " is above "
                 + cap(hit, cap), fix + CLINICIAN);
+    }
+
+    /**
+     * The capped load; when the set also states a reserve that the lighter load would leave far behind, the fix names
+     * the reserve to write with it as well, in words: a load change alone would leave a mislabelled set.
+     */
+    private static String cappedLoadFix(SetMetrics set, OneRepMaxRelation relation, double cap) {
+        double capped = Math.floor(cap * 1000 / 25) * 2.5 / 100;
+        String load = Texts.loadStepDown(cap);
+        if (set.agreement().statedRir().isEmpty()) {
+            return "load: " + load + " or lighter";
+        }
+        double reserve = relation.repsToFailure(capped) - set.reps();
+        if (reserve - set.agreement().statedRir().getAsDouble() <= set.agreement().tolerance()) {
+            return "load: " + load + " or lighter";
+        }
+        return "lighten to " + load + " of 1RM or less and write the reserve that leaves: about rir: "
+                + Math.round(reserve) + " for " + Texts.num(set.reps()) + " reps (or more reps at that load)";
     }
 
     /** A set of a capped region whose load nothing tells: it cannot be checked, which matters for a safety limit. */

@@ -114,8 +114,8 @@ public final class EffortConflictRule implements Rule {
             case MISLABELLED -> "load: " + Relations.loadFor(relation, set.reps() + a.statedRir().getAsDouble())
                     + " to leave " + Texts.num(a.statedRir().getAsDouble()) + " in reserve, or rir: "
                     + Math.round(a.impliedRir().getAsDouble()) + " if the lighter load is meant";
-            case RIR_RPE_DIFFER -> "state one of them: keep rir: " + p.rir().orElseThrow()
-                    + " and remove rpe, or write rpe: " + Texts.num(10 - p.rir().orElseThrow().midpoint());
+            case RIR_RPE_DIFFER -> "rpe: " + Texts.num(10 - p.rir().orElseThrow().midpoint()) + " to agree with rir: "
+                    + p.rir().orElseThrow() + ", or state one of them and remove the other";
             case AGREE, NOT_CHECKED -> throw new IllegalStateException("not a conflict: " + a.status());
         };
     }

@@ -70,9 +70,9 @@ public final class FarFromFailureRule implements Rule {
 
     private static String fix(RuleContext context, SetMetrics set) {
         return switch (set.effortSource()) {
-            case LOAD -> "a heavier load, e.g. load: "
+            case LOAD -> "load: "
                     + Relations.loadFor(context.metrics().parameters().oneRepMaxRelation(), set.reps() + 2) + " for "
-                    + Texts.num(set.reps()) + " reps at about 2 in reserve";
+                    + Texts.num(set.reps()) + " reps at about 2 in reserve (a heavier load)";
             case RPE -> "rpe: 8 with a load that leaves about two reps in reserve, or write them as warm-up sets";
             default -> "rir: 2 with a load that leaves about two reps in reserve, or write them as warm-up sets";
         };

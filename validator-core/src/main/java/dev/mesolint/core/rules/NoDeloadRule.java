@@ -58,7 +58,7 @@ public final class NoDeloadRule implements Rule {
         context.report(over.numberLocation(), over.waivers(), "weeks " + first.number() + "-" + last.number() + ": "
                 + run.size() + " weeks in a row without a deload week, more than the " + max + " the "
                 + context.profileName() + " profile allows for an " + context.programme().info().level().yamlName()
-                + " lifter", "make week " + over.number() + " (or an earlier one) a deload: deload: true, with "
-                        + "fewer sets or more reps in reserve");
+                + " lifter", "add deload: true to week " + over.number() + " (or an earlier one), with fewer sets "
+                        + "or more reps in reserve in it");
     }
 }

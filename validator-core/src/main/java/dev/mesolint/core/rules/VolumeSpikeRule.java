@@ -1,40 +1,58 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
+import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
-/** A muscle's weekly hard sets jump well above what the weeks before got it used to. */
+/**
+ * A muscle's weekly working sets jump well above what the weeks before got it used to.
+ *
+ * <p>It counts sets, never effort or load: a heavier load (which turns more sets "hard" and raises volume load) is
+ * not more volume. Intensity jumps are {@link IntensityJumpRule}'s.
+ */
 public final class VolumeSpikeRule implements Rule {
     public static final String ID = "volume-spike";
     static final String MAX_RATIO = "max-ratio";
     static final String MIN_ADDED_SETS = "min-added-sets";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A muscle's weekly hard sets stay within 1.5 x the mean of the up to four weeks before.",
+            "A muscle's weekly working sets stay within 1.5 x the mean of up to four non-deload weeks before, for "
+                    + "muscles the programme trains directly.",
             Severity.WARNING, RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_RATIO, 1.5, 1.1, 4,
-                            "Largest ratio of a week's hard sets to the mean of the weeks before (the model's "
-                                    + "acute:chronic figure; the number of weeks is the model's acuteChronicWeeks)."),
+                            "Largest ratio of a week's working sets for a muscle to the mean of the non-deload weeks "
+                                    + "before (up to the model's acuteChronicWeeks, 4)."),
                     RuleParameter.number(MIN_ADDED_SETS, 3, 0, 20,
-                            "Fewest hard sets above that mean that make a jump worth reporting, so that small muscles "
-                                    + "going from 1 to 2 sets are not called a spike.")),
+                            "Fewest working sets above that mean that make a jump worth reporting, so that small "
+                                    + "muscles going from 1 to 2 sets are not called a spike.")),
             "Gabbett's acute:chronic workload ratio compares a week's load with the rolling mean of the four weeks "
                     + "before; in team sports, weeks well above about 1.5 times that mean went with more injuries. "
-                    + "Applied to weekly hard sets per muscle, it asks that volume rise in steps the body has been "
-                    + "prepared for. The ratio has been criticised: it couples the two figures mathematically "
-                    + "(Lolli et al. 2019), rests on observational data, and its thresholds should not be read as "
-                    + "injury predictions (Impellizzeri et al. 2020, 2021). mesolint uses it only as a plain flag for "
-                    + "sudden jumps, and not before there is a week to compare with: the first week, and muscles not "
-                    + "trained in the weeks before, are not checked.",
+                    + "Applied to a muscle's weekly working sets, it asks that volume rise in steps the body has been "
+                    + "prepared for. The rule counts working sets of exercises whose prime mover the muscle is "
+                    + "(warm-ups and technique mini-sets are not sets); it never reads effort, load or volume load, "
+                    + "so adding weight to the bar, which turns more sets hard and raises volume load, is never a "
+                    + "spike (a jump in intensity is the intensity-jump rule's). Deload weeks are left out of the "
+                    + "mean, so the first week after a deload is compared with the training weeks before it. The "
+                    + "ratio has been criticised: it couples the two figures mathematically (Lolli et al. 2019), "
+                    + "rests on observational data, and its thresholds should not be read as injury predictions "
+                    + "(Impellizzeri et al. 2020, 2021). mesolint uses it only as a plain flag for sudden jumps, and "
+                    + "not before there is a week to compare with: the first week, and muscles not trained directly "
+                    + "in the weeks before, are not checked.",
             "Gabbett 2016, Br J Sports Med 50(5):273-280; critiques: Lolli et al. 2019; "
-                    + "Impellizzeri et al. 2020 and 2021");
+                    + "Impellizzeri et al. 2020 and 2021; sets, not load, as the volume measure for hypertrophy: "
+                    + "Schoenfeld et al. 2017, J Sports Sci 35(11):1073-1082");
 
     @Override
     public RuleMetadata metadata() {
@@ -47,26 +65,57 @@ public final class VolumeSpikeRule implements Rule {
         double minAdded = context.param(MIN_ADDED_SETS);
         int window = context.metrics().parameters().acuteChronicWeeks();
         List<WeekMetrics> weeks = context.metrics().weeks();
+        List<Map<Muscle, Integer>> sets = weeks.stream().map(w -> directSets(context, w)).toList();
         for (int i = 1; i < weeks.size(); i++) {
             WeekMetrics week = weeks.get(i);
-            for (Map.Entry<Muscle, Double> e : week.acuteChronic().entrySet()) {
-                double ratio = e.getValue();
-                double sets = week.hardSets(e.getKey());
-                double chronic = sets / ratio;
-                if (ratio <= maxRatio || sets - chronic < minAdded) {
+            List<Integer> before = baseline(weeks, i, window);
+            if (week.deload() || before.isEmpty()) {
+                continue;
+            }
+            for (Map.Entry<Muscle, Integer> e : sets.get(i).entrySet()) {
+                Muscle muscle = e.getKey();
+                double chronic = before.stream().mapToInt(b -> sets.get(b).getOrDefault(muscle, 0)).average()
+                        .orElse(0);
+                double now = e.getValue();
+                if (chronic == 0 || now / chronic <= maxRatio || now - chronic < minAdded) {
                     continue;
                 }
-                WeekMetrics from = weeks.get(Math.max(0, i - window));
-                WeekMetrics to = weeks.get(i - 1);
-                String before = from == to ? "week " + to.number() : "weeks " + from.number() + "-" + to.number();
-                String muscle = Texts.muscle(e.getKey());
-                Places.reportWeek(context, week, muscle + ", week " + week.number() + ": " + Texts.sets(sets)
-                        + ", " + Texts.num(ratio) + " x the mean of " + before + " (" + Texts.num(chronic)
-                        + "); the " + context.profileName() + " profile flags weeks over " + context.shown(MAX_RATIO)
+                String name = Texts.muscle(muscle);
+                Places.reportWeek(context, week, name + ", week " + week.number() + ": " + Texts.num(now)
+                        + " working sets with " + name + " as prime mover, " + Texts.num(now / chronic)
+                        + " x the mean of " + Texts.weeks(before.stream().map(b -> weeks.get(b).number()).toList()) + " (" + Texts.num(chronic) + "); the "
+                        + context.profileName() + " profile flags weeks over " + context.shown(MAX_RATIO)
                         + " x that mean",
-                        "raise " + muscle + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
-                                + " hard sets this week");
+                        "raise " + name + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
+                                + " working sets this week");
             }
         }
+    }
+
+    /** Indexes of up to {@code window} non-deload weeks before week {@code i}, nearest last. */
+    private static List<Integer> baseline(List<WeekMetrics> weeks, int i, int window) {
+        List<Integer> before = new ArrayList<>();
+        for (int b = i - 1; b >= 0 && before.size() < window; b--) {
+            if (!weeks.get(b).deload()) {
+                before.add(0, b);
+            }
+        }
+        return before;
+    }
+
+    /** Working sets per muscle in the week, counting each set for the muscles its exercise has as prime movers. */
+    private static Map<Muscle, Integer> directSets(RuleContext context, WeekMetrics week) {
+        Map<Muscle, Integer> sets = new EnumMap<>(Muscle.class);
+        for (SessionMetrics session : week.sessions()) {
+            for (SetMetrics set : session.sets()) {
+                Optional<Exercise> exercise = context.exercise(set.exerciseId());
+                exercise.ifPresent(x -> x.muscles().forEach((muscle, credit) -> {
+                    if (credit >= 1) {
+                        sets.merge(muscle, 1, Integer::sum);
+                    }
+                }));
+            }
+        }
+        return sets;
     }
 }

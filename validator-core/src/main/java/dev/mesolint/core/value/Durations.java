@@ -47,6 +47,19 @@ public final class Durations {
         return result;
     }
 
+    /** Ten minutes: the longest timed hold a set may prescribe. */
+    public static final Duration MAX_HOLD = Duration.ofMinutes(10);
+
+    /** A timed hold ({@code hold: 30s}): a duration of at most {@link #MAX_HOLD}. */
+    public static Duration parseHold(String text) throws InvalidValueException {
+        Duration d = parse(text);
+        if (d.isZero() || d.compareTo(MAX_HOLD) > 0) {
+            throw new InvalidValueException("a hold of '" + text + "' is not between 1 s and 10 min",
+                    "write a hold such as 30s or 1min; a longer effort is a conditioning piece, not a set");
+        }
+        return d;
+    }
+
     private static Duration ofSeconds(double seconds) {
         return Duration.ofMillis(Math.round(seconds * 1000));
     }

@@ -4,14 +4,19 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Reps per set: a number ({@code 8}), a range ({@code 8-12}) or {@code amrap} (as many as possible, to failure).
+ * Reps per set: a number ({@code 8}), a range ({@code 8-12}), {@code amrap} (as many as possible, to failure) or
+ * {@code 5+} (at least 5, then as many as possible: to failure once the stated minimum is done).
+ *
+ * <p>{@code 5+} is an AMRAP set with a floor: {@link #amrap()} is true and {@link #min()} is 5. A plain
+ * {@code amrap} has no floor ({@code min} 0).
  */
 public record RepTarget(int min, int max, boolean amrap) {
-    public static final String HINT = "write a whole number such as 8, a range such as 8-12, or amrap";
+    public static final String HINT = "write a whole number such as 8, a range such as 8-12, 5+ (at least 5, then as many as possible) or amrap";
     public static final int MAX_REPS = 100;
     public static final RepTarget AMRAP = new RepTarget(0, 0, true);
 
     private static final Pattern RANGE = Pattern.compile("(\\d+)\\s*-\\s*(\\d+)");
+    private static final Pattern AT_LEAST = Pattern.compile("(\\d+)\\s*\\+");
 
     public RepTarget {
         if (!amrap && (min < 1 || max < min || max > MAX_REPS)) {
@@ -23,6 +28,14 @@ public record RepTarget(int min, int max, boolean amrap) {
         return new RepTarget(reps, reps, false);
     }
 
+    /** {@code n+}: at least {@code n} reps, then as many as possible. */
+    public static RepTarget atLeast(int reps) {
+        if (reps < 1 || reps > MAX_REPS) {
+            throw new IllegalArgumentException("bad rep floor " + reps);
+        }
+        return new RepTarget(reps, reps, true);
+    }
+
     public static RepTarget parse(String text) throws InvalidValueException {
         String s = text == null ? "" : text.trim();
         if (s.equalsIgnoreCase("amrap")) {
@@ -30,6 +43,10 @@ public record RepTarget(int min, int max, boolean amrap) {
         }
         if (s.matches("\\d+")) {
             return exactly(checked(text, Integer.parseInt(s)));
+        }
+        Matcher floor = AT_LEAST.matcher(s);
+        if (floor.matches()) {
+            return atLeast(checked(text, Integer.parseInt(floor.group(1))));
         }
         Matcher m = RANGE.matcher(s);
         if (m.matches()) {
@@ -51,6 +68,16 @@ public record RepTarget(int min, int max, boolean amrap) {
         return reps;
     }
 
+    /** True for {@code 5+}: an AMRAP set with a stated minimum. */
+    public boolean hasFloor() {
+        return amrap && min > 0;
+    }
+
+    /** The same target without its "as many as possible" part: {@code 5+} becomes {@code 5}. */
+    public RepTarget withoutAmrap() {
+        return hasFloor() ? exactly(min) : this;
+    }
+
     public boolean isRange() {
         return !amrap && max > min;
     }
@@ -62,6 +89,6 @@ public record RepTarget(int min, int max, boolean amrap) {
 
     @Override
     public String toString() {
-        return amrap ? "amrap" : isRange() ? min + "-" + max : Integer.toString(min);
+        return hasFloor() ? min + "+" : amrap ? "amrap" : isRange() ? min + "-" + max : Integer.toString(min);
     }
 }

@@ -65,6 +65,35 @@ class BuiltInCatalogueTests {
     }
 
     @Test
+    void olympicLiftsJumpsAndThrowsAreBallisticAndGrindsAreNot() {
+        // common practice: in the Olympic lifts and their power variants, jumps and throws a set ends with a missed
+        // lift (the bar too slow to catch), not with muscular failure
+        for (String id : List.of("power-clean", "hang-power-clean", "barbell-clean", "barbell-snatch", "power-snatch",
+                "hang-power-snatch", "barbell-clean-and-jerk", "barbell-split-jerk", "barbell-push-jerk",
+                "barbell-push-press", "barbell-jump-squat", "box-jump", "medicine-ball-chest-pass",
+                "medicine-ball-slam", "kettlebell-swing")) {
+            assertTrue(CATALOGUE.find(id).orElseThrow().ballistic(), id);
+        }
+        for (String id : List.of("barbell-back-squat", "barbell-deadlift", "barbell-bench-press", "cable-curl")) {
+            assertTrue(!CATALOGUE.find(id).orElseThrow().ballistic(), id);
+        }
+    }
+
+    @Test
+    void theCompetitionLiftsAreMainAndMachinesAndIsolationWorkAreAssistance() {
+        // common practice: squat, bench press, deadlift, overhead press and the Olympic lifts are the main lifts a
+        // strength session is built around; rows, lunges, machines and one-joint work assist them
+        for (String id : List.of("barbell-back-squat", "barbell-front-squat", "barbell-deadlift", "sumo-deadlift",
+                "barbell-bench-press", "barbell-overhead-press", "power-clean", "barbell-snatch", "trap-bar-deadlift")) {
+            assertEquals(Role.MAIN, CATALOGUE.find(id).orElseThrow().defaultRole(), id);
+        }
+        for (String id : List.of("goblet-squat", "machine-leg-press", "barbell-bent-over-row", "pull-up",
+                "dumbbell-walking-lunge", "cable-curl", "machine-leg-extension", "barbell-romanian-deadlift")) {
+            assertEquals(Role.ASSISTANCE, CATALOGUE.find(id).orElseThrow().defaultRole(), id);
+        }
+    }
+
+    @Test
     void suggestionsFindNearMissesAndSharedWords() {
         assertEquals("barbell-bench-press", CATALOGUE.closest("barbel-bench-press", 3).get(0));
         assertEquals("barbell-back-squat", CATALOGUE.closest("barbell-backsquat", 3).get(0));

@@ -159,7 +159,7 @@ class WorkspaceTests {
     @Test
     void badConfigurationIsALocatedErrorWithAFix() {
         assertEquals(".mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: did you "
-                + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline)",
+                + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root)",
                 problem("profile: strength\nfail-level: warning\n").describe());
         assertEquals(".mesolint.yaml:1:10: fail-on 'sometimes' is not a level (fix: one of: error, warning, info)",
                 problem("fail-on: sometimes\n").describe());

@@ -107,7 +107,8 @@ class SetFatigueTests {
                 reps("10").rir("0").rest("2min").technique(Technique.DROP_SET).build(1),
                 reps("10").rir("0").rest("2min").build(2))));
         assertAll(
-                () -> assertEquals(6, dropped.get(0).extraReps()),
+                // Two drops of 6 reps each (common practice: two or three drops of about 20%).
+                () -> assertEquals(12, dropped.get(0).extraReps()),
                 () -> assertTrue(dropped.get(0).stimulatingReps() > plain.get(0).stimulatingReps()),
                 () -> assertTrue(dropped.get(0).stimulus() > plain.get(0).stimulus()),
                 () -> assertTrue(dropped.get(1).recruitment() < plain.get(1).recruitment()));
@@ -118,12 +119,14 @@ class SetFatigueTests {
         SetMetrics set = sets(exercise("dumbbell-curl", List.of(
                 reps("10").rir("1").technique(Technique.REST_PAUSE).build(1)))).get(0);
         ModelParameters p = ModelParameters.defaults();
-        // Each mini-set of 3 reps at failure gives 3 stimulating reps (common practice: the last ~5 reps).
+        // Each mini-set of 3 reps at failure gives 3 stimulating reps (common practice: the last ~5 reps). The
+        // mini-sets go on with the units the set recruited, so a fresh rest-pause set counts every stimulating rep
+        // in full: drop sets and rest-pause grow muscle about as well as more straight sets (Fink et al. 2018;
+        // Coleman et al. 2022), where the earlier model discounted them for their own fatigue.
         assertAll(
                 () -> assertEquals(p.restPauseMiniSets() * p.restPauseMiniSetReps(), set.extraReps()),
                 () -> assertEquals(4 + p.restPauseMiniSets() * 3, set.stimulatingReps(), 1e-9),
-                () -> assertTrue(set.stimulus() < set.stimulatingReps() / 5,
-                        "mini-sets come with fatigue, so they give less than fresh reps"));
+                () -> assertEquals(set.stimulatingReps() / 5, set.stimulus(), 1e-9));
     }
 
     @Test

@@ -2,6 +2,7 @@ package dev.mesolint.core.model;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -12,13 +13,33 @@ class StimulusModelTests {
 
     private final StimulusModel model = new StimulusModel(ModelParameters.defaults());
 
-    // Common practice: the last ~5 reps before failure are the stimulating ones; a set cannot give more
-    // stimulating reps than it has reps, and a set ending 5 or more reps from failure gives none.
+    // Common practice (brief check values): the last ~5 reps before failure are the stimulating ones, and a set
+    // cannot give more stimulating reps than it has reps: clamp(5 - r, 0, n), held within 0.1 rep for r <= 4.
     @ParameterizedTest(name = "{0} reps at RIR {1} -> {2} stimulating reps")
-    @CsvSource({"12, 0, 5", "5, 0, 5", "1, 4, 1", "8, 5, 0", "20, 7, 0", "8, 1, 4", "8, 3, 2", "3, 0, 3",
-            "10, 0.5, 4.5"})
+    @CsvSource({"12, 0, 5", "5, 0, 5", "1, 4, 1", "8, 1, 4", "8, 3, 2", "3, 0, 3", "10, 0.5, 4.5", "12, 4, 1",
+            "10, 3.5, 1.5", "2, 2, 2"})
     void stimulatingRepsAreTheLastFiveBeforeFailure(double reps, double rir, double expected) {
-        assertEquals(expected, model.stimulatingReps(reps, rir), 1e-9);
+        assertEquals(expected, model.stimulatingReps(reps, rir), 0.1);
+    }
+
+    @Test
+    void setsFiveOrMoreRepsFromFailureGiveASmallFallingNonZeroCount() {
+        // Robinson et al. 2024 (meta-regression, Sports Med): growth falls as reps in reserve rise but stays above
+        // zero far from failure; the brief: RIR 5+ small, falling, not zero.
+        double previous = model.stimulatingReps(20, 4);
+        for (double rir = 5; rir <= 12; rir += 0.5) {
+            double count = model.stimulatingReps(20, rir);
+            assertTrue(count > 0 && count < previous, "RIR " + rir + ": " + count);
+            assertTrue(count < 0.6, "RIR " + rir + " is small: " + count);
+            previous = count;
+        }
+    }
+
+    @Test
+    void theTailMeetsTheLineWithoutAStep() {
+        // The count is smooth where the tail takes over (r = K - L = 3.5): no jump a rule could trip over.
+        double bend = 3.5;
+        assertEquals(model.stimulatingReps(20, bend - 1e-6), model.stimulatingReps(20, bend + 1e-6), 1e-5);
     }
 
     @Test

@@ -32,7 +32,7 @@ class RuleMessagesTests {
                 "short-rest-isolation/failing.yaml",
                 "fatigue-technique/failing.yaml", "fatigue-technique/failing-general-fitness.yaml",
                 "unstable-surface/failing.yaml", "slow-concentric/failing.yaml", "constraint-avoid/failing.yaml",
-                "no-deload/failing.yaml")) {
+                "no-deload/failing.yaml", "volume-spike/failing.yaml", "intensity-jump/failing.yaml")) {
             examples.add(RuleExample.read(FixtureHarness.FIXTURES.resolve(f)));
         }
         reports = FixtureHarness.check(examples, BuiltInRules.all());
@@ -139,8 +139,27 @@ class RuleMessagesTests {
     @Test
     void noDeload() {
         assertEquals("info weeks 1-8: 8 weeks in a row without a deload week, more than the 6 the hypertrophy "
-                + "profile allows for an intermediate lifter (fix: make week 7 (or an earlier one) a deload: "
-                + "deload: true, with fewer sets or more reps in reserve)", text(found("no-deload/failing.yaml",
+                + "profile allows for an intermediate lifter (fix: add deload: true to week 7 (or an earlier "
+                + "one), with fewer sets or more reps in reserve in it)", text(found("no-deload/failing.yaml",
                 NoDeloadRule.ID).get(0)));
+    }
+
+    @Test
+    void volumeSpike() {
+        // Gabbett 2016, BJSM 50(5):273-280: the week against the mean of the (up to four) weeks before, 1.5 x;
+        // sets as the volume measure: Schoenfeld et al. 2017, J Sports Sci 35(11):1073-1082
+        assertEquals("warning chest, week 3: 16 working sets with chest as prime mover, 2 x the mean of weeks 1-2 "
+                + "(8); the hypertrophy profile flags weeks over 1.5 x that mean (fix: raise chest volume in steps: "
+                + "at most 12 working sets this week)", text(found("volume-spike/failing.yaml", VolumeSpikeRule.ID)
+                        .get(0)));
+    }
+
+    @Test
+    void intensityJump() {
+        // ACSM 2009 position stand (Ratamess et al., MSSE 41(3):687-708): load increments of 2-10%
+        assertEquals("warning barbell-bench-press, week 2: top set 90% of 1RM, 12.5 points over the 77.5% of week 1; "
+                + "the hypertrophy profile flags rises over 10 points a week (fix: load: 87.5% for the top set this "
+                + "week, and the rest of the rise next week)", text(found("intensity-jump/failing.yaml",
+                        IntensityJumpRule.ID).get(0)));
     }
 }
