@@ -2,6 +2,7 @@ package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.review.ChangeReview;
 import dev.mesolint.core.review.Review;
 import dev.mesolint.core.review.ReviewFormat;
@@ -107,14 +108,15 @@ final class DiffCommand implements Callable<Integer> {
     public Integer call() {
         Review review;
         List<RuleDefinition> rules;
+        RunOptions run = options.toRunOptions(paths, catalogues.files, Optional.empty(), Optional.empty());
         try {
             rules = Installed.rules().rules();
-            review = ChangeReview.run(new ReviewRequest(options.toRunOptions(catalogues.files, Optional.empty(),
-                    Optional.empty()), paths, Optional.ofNullable(base), Optional.ofNullable(head)), rules);
+            review = ChangeReview.run(new ReviewRequest(run, paths, Optional.ofNullable(base),
+                    Optional.ofNullable(head)), rules);
         } catch (ConfigProblem e) {
             return Installed.fail(e, spec.commandLine().getErr());
         }
-        Path root = options.toRunOptions(List.of(), Optional.empty(), Optional.empty()).root();
+        Path root = run.root();
         ReviewInput input = new ReviewInput(review, rules, root, showReasons);
         try {
             format.writer().write(input, spec.commandLine().getOut());
