@@ -10,6 +10,8 @@ import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.ReportFiles;
+import dev.mesolint.core.report.ReportFormat;
+import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
@@ -32,7 +34,9 @@ import picocli.CommandLine.Parameters;
         description = {"Checks programme files, and every *.yaml / *.yml below the folders given.",
             "Findings print as path:line:column: severity rule-id: message, with a fix on the next line.",
             "Reports for CI and coaches are written with --report FORMAT=PATH (repeatable), e.g.",
-            "  --report sarif=target/mesolint.sarif --report html=target/mesolint.html"},
+            "  --report sarif=target/mesolint.sarif --report html=target/mesolint.html",
+            "Standard output carries one document, so it can be piped: --format sarif | jq, or --report sarif=-.",
+            "'-' as the PATH reads one programme from standard input (editors: add --stdin-filename PATH)."},
         footer = {"", ConfigOptions.PRECEDENCE, "",
             "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
             "", "Caution: " + Mesolint.CAUTION})
@@ -50,8 +54,15 @@ final class CheckCommand implements Callable<Integer> {
         }
     }
 
-    @Parameters(arity = "1..*", paramLabel = "PATH", description = "Programme files or folders.")
+    @Parameters(arity = "1..*", paramLabel = "PATH",
+            description = "Programme files or folders; '-' reads one programme from standard input.")
     List<Path> paths = new ArrayList<>();
+
+    @Mixin
+    OutputOptions output;
+
+    @Mixin
+    StandardInput stdin;
 
     @Mixin
     ConfigOptions options;
@@ -80,17 +91,30 @@ final class CheckCommand implements Callable<Integer> {
                 "e.g. --report sarif=target/mesolint.sarif --report html=target/mesolint.html"})
     List<ReportTarget> reports = new ArrayList<>();
 
+    @Option(names = "--help-uri-base", paramLabel = "URL",
+            description = "Where your team publishes the rule reference pages (docs/rules): reports link each rule "
+                    + "to URL/RULE-ID.md. Default: no links; SARIF carries each rule's page inline.")
+    String helpUriBase;
+
+    @Option(names = "--junit-fail-at", paramLabel = "LEVEL",
+            description = "JUnit report: a rule's test case fails on findings at this level or above: error, warning "
+                    + "or info (default: the fail level, so a case fails exactly when its findings fail the run).")
+    String junitFailAt;
+
+    @CommandLine.ParentCommand
+    MesolintCommand parent;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
-    public Integer call() {
-        Optional<Severity> level = Optional.empty();
-        if (failOn != null) {
-            level = Optional.of(Severity.parseFailLevel(failOn).orElseThrow(() ->
-                    new CommandLine.ParameterException(spec.commandLine(),
-                            "--fail-on must be error, warning or info, not '" + failOn + "'")));
-        }
+    public Integer call() throws IOException {
+        CommandLine cli = spec.commandLine();
+        Optional<Severity> level = level(failOn, "--fail-on");
+        Optional<Severity> junitLevel = level(junitFailAt, "--junit-fail-at");
+        ReportFormat stdoutFormat = output.stdoutFormat(reports, cli);
+        Optional<StandardInput.Document> piped = stdin.read(paths, parent.in(), cli);
+        List<Path> located = piped.map(d -> List.of(d.path())).orElse(paths);
         RunReport report;
         Workspace workspace;
         CheckRequest request;
@@ -98,34 +122,58 @@ final class CheckCommand implements Callable<Integer> {
         long started = System.nanoTime();
         try {
             installed = Installed.rules();
-            workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, level, Optional.ofNullable(baseline)),
-                    installed.rules());
-            request = workspace.request(paths);
-            report = new Checker(request, installed.rules()).run();
+            workspace = Workspace.open(options.toRunOptions(located, catalogues.files, level,
+                    Optional.ofNullable(baseline)), installed.rules());
+            request = workspace.request(piped.isPresent() ? List.of() : paths);
+            Checker checker = new Checker(request, installed.rules());
+            report = piped.map(d -> checker.run(d.path(), d.content())).orElseGet(checker::run);
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }
         } catch (ConfigProblem e) {
-            return Installed.fail(e, spec.commandLine().getErr());
+            return Installed.fail(e, cli.getErr());
         }
+        // Missing paths first, so that no summary of what was checked comes before the error.
+        report.missing().forEach(m -> cli.getErr().println("mesolint: no such file or folder: " + m
+                + " (check the path; it is read from the current folder)"));
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
-        new ConsoleReport(showWaived).write(report, spec.commandLine().getOut());
-        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed);
+        ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
+                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent())
+                .withJunitFailAt(junitLevel);
+        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording);
+        if (stdoutFormat == ReportFormat.CONSOLE) {
+            if (!report.files().isEmpty() || report.missing().isEmpty()) {
+                output.console(showWaived).write(report, cli.getOut());
+            }
+        } else {
+            stdoutFormat.writer(null).write(input, cli.getOut());
+            cli.getOut().flush();
+        }
         for (ReportTarget target : reports) {
+            if (target.toStdout()) {
+                continue;
+            }
             try {
                 ReportFiles.write(input, target);
             } catch (IOException e) {
-                spec.commandLine().getErr().println("mesolint: cannot write the " + target.format().id()
+                cli.getErr().println("mesolint: cannot write the " + target.format().id()
                         + " report to " + target.path() + ": " + e.getMessage());
                 return MesolintCommand.EXIT_USAGE;
             }
         }
-        report.missing().forEach(m -> spec.commandLine().getErr().println("mesolint: no such file or folder: " + m));
         boolean missing = !report.missing().isEmpty();
         boolean internal = report.active().stream().anyMatch(f -> f.ruleId().equals(InternalErrorRule.ID));
         if (missing || internal) {
             return MesolintCommand.EXIT_USAGE;
         }
         return report.failed() ? 1 : 0;
+    }
+
+    private Optional<Severity> level(String text, String option) {
+        if (text == null) {
+            return Optional.empty();
+        }
+        return Optional.of(Severity.parseFailLevel(text).orElseThrow(() -> new CommandLine.ParameterException(
+                spec.commandLine(), option + " must be error, warning or info, not '" + text + "'")));
     }
 }

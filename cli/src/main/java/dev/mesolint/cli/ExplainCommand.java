@@ -6,10 +6,8 @@ import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.profile.ProfileSet;
 import dev.mesolint.core.reference.RuleReference;
+import dev.mesolint.core.report.RulePages;
 import dev.mesolint.core.rule.RuleDefinition;
-import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
@@ -22,9 +20,6 @@ import picocli.CommandLine.Parameters;
                 + "profile, why, the source, and examples.", "The same pages are in docs/rules/ of the project."},
         footer = {"", "Caution: " + Mesolint.CAUTION})
 final class ExplainCommand implements Callable<Integer> {
-    /** Where the build puts the generated pages of docs/rules/ in the core jar. */
-    static final String PAGES = "/dev/mesolint/reference/rules/";
-
     @Parameters(paramLabel = "RULE-ID", description = "A rule id, e.g. short-rest-compound.")
     String ruleId;
 
@@ -32,7 +27,7 @@ final class ExplainCommand implements Callable<Integer> {
     CommandLine.Model.CommandSpec spec;
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         InstalledRules installed;
         try {
             installed = Installed.rules();
@@ -46,14 +41,9 @@ final class ExplainCommand implements Callable<Integer> {
                             + "'?").orElse("") + " (list the rules with 'mesolint rules')");
             return MesolintCommand.EXIT_USAGE;
         }
-        String page;
-        try (InputStream in = ExplainCommand.class.getResourceAsStream(PAGES + ruleId + ".md")) {
-            // Built-in rules have a generated page in the jar; a pack rule's page is built from its metadata.
-            page = in != null
-                    ? new String(in.readAllBytes(), StandardCharsets.UTF_8)
-                    : new RuleReference(installed.rules(), ProfileSet.builtIn(installed.rules()))
-                            .page(rule.get(), Optional.empty());
-        }
+        // Built-in rules have a generated page in the jar; a pack rule's page is built from its metadata.
+        String page = RulePages.page(ruleId).orElseGet(() -> new RuleReference(installed.rules(),
+                ProfileSet.builtIn(installed.rules())).page(rule.get(), Optional.empty()));
         spec.commandLine().getOut().print(page);
         spec.commandLine().getOut().flush();
         return 0;

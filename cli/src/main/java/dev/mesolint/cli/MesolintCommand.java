@@ -1,7 +1,9 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import java.io.InputStream;
 import java.io.PrintWriter;
+import picocli.AutoComplete;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -14,12 +16,20 @@ import picocli.CommandLine.Command;
             "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
             "", "Caution: " + Mesolint.CAUTION},
         subcommands = {CheckCommand.class, DiffCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
-            ExplainCommand.class, CatalogueCommand.class, CommandLine.HelpCommand.class})
+            ExplainCommand.class, CatalogueCommand.class, AutoComplete.GenerateCompletion.class,
+            CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;
 
+    /** Standard input, for {@code check -}; a field so that tests can hand in their own. */
+    private InputStream in = System.in;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
+
+    InputStream in() {
+        return in;
+    }
 
     @Override
     public void run() {
@@ -32,7 +42,14 @@ public final class MesolintCommand implements Runnable {
 
     /** Runs the command line with the given streams; returns the exit code. */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cli = new CommandLine(new MesolintCommand());
+        return execute(args, System.in, out, err);
+    }
+
+    /** Runs the command line with the given streams, {@code in} standing for standard input; returns the exit code. */
+    public static int execute(String[] args, InputStream in, PrintWriter out, PrintWriter err) {
+        MesolintCommand top = new MesolintCommand();
+        top.in = in;
+        CommandLine cli = new CommandLine(top);
         cli.setOut(out);
         cli.setErr(err);
         cli.setCaseInsensitiveEnumValuesAllowed(true);

@@ -55,6 +55,15 @@ final class MetricsCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** A file to write, its folders created first, as for every output of mesolint. */
+    private static Writer newFile(Path file) throws IOException {
+        Path parent = file.toAbsolutePath().getParent();
+        if (parent != null) {
+            Files.createDirectories(parent);
+        }
+        return Files.newBufferedWriter(file, StandardCharsets.UTF_8);
+    }
+
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
@@ -82,12 +91,12 @@ final class MetricsCommand implements Callable<Integer> {
         }
         new MetricsTableFormatter().write(measured, out);
         if (json != null) {
-            try (Writer w = Files.newBufferedWriter(json, StandardCharsets.UTF_8)) {
+            try (Writer w = newFile(json)) {
                 new MetricsJsonWriter().write(measured, w);
             }
         }
         if (csv != null) {
-            try (Writer w = Files.newBufferedWriter(csv, StandardCharsets.UTF_8)) {
+            try (Writer w = newFile(csv)) {
                 new MetricsCsvWriter().write(measured, w);
             }
         }

@@ -3,6 +3,7 @@ package dev.mesolint.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.mesolint.core.Mesolint;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
@@ -18,8 +19,9 @@ class MetricsCommandTests {
     @Test
     void printsTheWeeklyTableAndWritesJsonAndCsv() throws Exception {
         StringWriter out = new StringWriter();
-        Path json = dir.resolve("metrics.json");
-        Path csv = dir.resolve("metrics.csv");
+        // Folders that do not exist yet are created, as for every output.
+        Path json = dir.resolve("reports/figures/metrics.json");
+        Path csv = dir.resolve("reports/sheets/metrics.csv");
         int exit = MesolintCommand.execute(new String[] {"metrics", "--root", "..", "--json", json.toString(), "--csv",
             csv.toString(), "../sample-programs/programmes/novice-full-body.yaml"}, new PrintWriter(out, true),
                 new PrintWriter(new StringWriter(), true));
@@ -29,8 +31,13 @@ class MetricsCommandTests {
         String text = Files.readString(json);
         assertTrue(text.contains("\"file\" : \"sample-programs/programmes/novice-full-body.yaml\"")
                 || text.contains("\"file\":\"sample-programs/programmes/novice-full-body.yaml\""), text.substring(0, 300));
+        assertTrue(text.contains(Mesolint.CAUTION), "the caution is in the JSON");
         List<String> rows = Files.readAllLines(csv);
         assertTrue(rows.size() > 10, "one row per set plus a header");
+        String last = rows.get(rows.size() - 1);
+        assertTrue(last.startsWith("\"Caution: " + Mesolint.CAUTION.substring(0, 30)), last);
+        assertEquals(rows.get(0).split(",", -1).length, last.replaceAll("\"[^\"]*\"", "x").split(",", -1).length,
+                "the caution row keeps the table's width");
     }
 
     @Test

@@ -89,7 +89,8 @@ public final class Baseline {
                     findings.add(f);
                 }
             }
-            files.add(new FileReport(file.displayPath(), file.programme(), file.profile(), findings));
+            files.add(new FileReport(file.displayPath(), file.programme(), file.profile(), findings, file.metrics(),
+                    file.timing()));
         }
         return new RunReport(files, run.failOn(), run.missing());
     }

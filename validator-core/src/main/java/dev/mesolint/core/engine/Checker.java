@@ -22,8 +22,11 @@ import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.YamlProblem;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -79,6 +82,13 @@ public final class Checker {
         return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
     }
 
+    /** Checks one document read elsewhere (standard input), shown and configured as if it were {@code shownAs}. */
+    public RunReport run(Path shownAs, byte[] content) {
+        List<FileReport> reports = new ArrayList<>(catalogueReports);
+        reports.add(checkFile(shownAs, content));
+        return new RunReport(reports, request.failOn(), List.of());
+    }
+
     /** Checks one programme file; any failure becomes a finding on that file, never an exception. */
     public FileReport checkFile(Path file) {
         return checkSafely(file, () -> reader.read(file));
@@ -91,8 +101,11 @@ public final class Checker {
 
     private FileReport checkSafely(Path file, DocumentSource source) {
         String shown = ProgrammeFiles.display(request.root(), file);
+        long started = System.nanoTime();
         try {
-            return check(source, shown);
+            FileReport report = check(source, shown);
+            return report.withTiming(new FileTiming(Duration.ofNanos(System.nanoTime() - started),
+                    report.timing().perRule()));
         } catch (RuntimeException | StackOverflowError e) {
             String cause = e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
             return violationReport(shown, null, InternalErrorRule.ID, List.of(new Violation(Location.START,
@@ -134,8 +147,9 @@ public final class Checker {
         ProgrammeMetrics metrics = ProgrammeMetrics.compute(programme, fileCatalogue,
                 request.configuration().modelParameters(profile));
         FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
-        new RuleRunner(rules, request.configuration()).run(scope);
-        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics));
+        Map<String, Duration> ruleTimes = new RuleRunner(rules, request.configuration()).run(scope);
+        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics),
+                new FileTiming(Duration.ZERO, ruleTimes));
     }
 
     private FileReport violationReport(String shown, Programme programme, String ruleId, List<Violation> violations) {
@@ -160,16 +174,21 @@ public final class Checker {
             this.configuration = configuration;
         }
 
-        void run(FileScope scope) {
+        /** Runs the rules; returns the time each took, for reports. */
+        Map<String, Duration> run(FileScope scope) {
+            Map<String, Duration> times = new HashMap<>();
             for (RuleDefinition definition : rules) {
                 if (definition instanceof Rule rule) {
                     RuleSettings settings = configuration.settingsFor(scope.profileName(), rule);
                     if (settings.severity() != dev.mesolint.core.finding.Severity.OFF) {
+                        long started = System.nanoTime();
                         rule.check(new dev.mesolint.core.rule.RuleContext(scope, rule.metadata(), settings));
+                        times.put(rule.id(), Duration.ofNanos(System.nanoTime() - started));
                     }
                 }
             }
             new WaiverAudit(rules, configuration).report(scope);
+            return times;
         }
     }
 }

@@ -15,9 +15,10 @@ import java.util.Optional;
  * @param programme   present when the file loaded (even if rules then found problems)
  * @param profile     the rule profile the file was checked under
  * @param metrics     the training-model figures, present when the programme loaded
+ * @param timing      how long the check took, in all and per rule ({@link FileTiming#NONE} when reused or unknown)
  */
 public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
-        Optional<ProgrammeMetrics> metrics) {
+        Optional<ProgrammeMetrics> metrics, FileTiming timing) {
 
     private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
             .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)
@@ -25,6 +26,17 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
 
     public FileReport {
         findings = findings.stream().sorted(ORDER).toList();
+        java.util.Objects.requireNonNull(timing, "timing");
+    }
+
+    public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
+            Optional<ProgrammeMetrics> metrics) {
+        this(displayPath, programme, profile, findings, metrics, FileTiming.NONE);
+    }
+
+    /** This report with its timing. */
+    public FileReport withTiming(FileTiming newTiming) {
+        return new FileReport(displayPath, programme, profile, findings, metrics, newTiming);
     }
 
     /** A report without training-model figures (the file did not load, or figures were not asked for). */

@@ -14,12 +14,22 @@ import java.util.List;
  * The console form: one finding per line as {@code path:line:column: severity rule-id: message}, the fix on the
  * next line, then a summary and the caution. Editors and CI log parsers read the first line's form. Findings held
  * by the baseline are shown on one line marked {@code baselined}, without their fix, and are not counted.
+ *
+ * <p>Quiet, only the findings that fail the run are printed, then the caution; a clean run prints nothing.
  */
 public final class ConsoleReport implements ReportWriter {
     private final boolean showWaived;
+    private final boolean quiet;
+    private final ConsoleStyle style;
 
     public ConsoleReport(boolean showWaived) {
+        this(showWaived, false, ConsoleStyle.PLAIN);
+    }
+
+    public ConsoleReport(boolean showWaived, boolean quiet, ConsoleStyle style) {
         this.showWaived = showWaived;
+        this.quiet = quiet;
+        this.style = style;
     }
 
     @Override
@@ -28,17 +38,52 @@ public final class ConsoleReport implements ReportWriter {
     }
 
     public void write(RunReport run, PrintWriter out) {
+        boolean printed = false;
         for (FileReport file : run.files()) {
             for (Finding f : file.findings()) {
-                if (f.waived() && !showWaived || f.severity() == Severity.OFF) {
+                if (!shown(f, run)) {
                     continue;
                 }
-                lines(f).forEach(out::println);
+                List<String> lines = lines(f);
+                out.println(styled(f, lines.get(0)));
+                lines.subList(1, lines.size()).forEach(l -> out.println(style.detail(l)));
+                printed = true;
             }
         }
-        out.println(summary(run));
-        out.println("Note: " + Mesolint.CAUTION);
+        if (!quiet) {
+            out.println(summary(run));
+        }
+        if (!quiet || printed) {
+            out.println("Note: " + Mesolint.CAUTION);
+        }
         out.flush();
+    }
+
+    private boolean shown(Finding f, RunReport run) {
+        if (f.severity() == Severity.OFF) {
+            return false;
+        }
+        if (quiet) {
+            return !f.waived() && !f.baselined() && f.severity().atLeast(run.failOn());
+        }
+        return !f.waived() || showWaived;
+    }
+
+    /** The first line with the path and the severity word styled; the text is that of {@link #line}. */
+    private String styled(Finding f, String line) {
+        if (style == ConsoleStyle.PLAIN) {
+            return line;
+        }
+        String word = (f.waived() ? "waived " : f.baselined() ? "baselined " : "") + f.severity().label();
+        String place = ":" + f.location().line() + ":" + f.location().column() + ": ";
+        int pathEnd = line.indexOf(place + word);
+        if (pathEnd < 0) {
+            return line;
+        }
+        int wordStart = pathEnd + place.length();
+        int wordEnd = wordStart + word.length();
+        return style.path(line.substring(0, pathEnd + place.length() - 2)) + ": "
+                + style.severity(f.severity(), f.waived() || f.baselined(), word) + line.substring(wordEnd);
     }
 
     public static String line(Finding f) {

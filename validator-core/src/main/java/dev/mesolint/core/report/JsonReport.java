@@ -30,8 +30,7 @@ public final class JsonReport implements ReportWriter {
         ObjectNode doc = JsonText.object();
         doc.put("$schema", SCHEMA_ID);
         doc.put("formatVersion", FORMAT_VERSION);
-        doc.putObject("tool").put("name", "mesolint").put("version", Mesolint.version())
-                .put("informationUri", Mesolint.INFORMATION_URI);
+        doc.putObject("tool").put("name", "mesolint").put("version", Mesolint.version());
         doc.put("caution", Mesolint.CAUTION);
         doc.put("failOn", run.failOn().label());
         doc.put("failed", run.failed());
@@ -82,7 +81,7 @@ public final class JsonReport implements ReportWriter {
         node.put("pointer", f.location().pointer());
         node.put("message", f.message());
         node.put("fix", f.fix());
-        node.put("helpUri", RuleDocs.uri(f.ruleId()));
+        input.options().helpUri(f.ruleId()).ifPresent(uri -> node.put("helpUri", uri));
         node.put("fingerprint", Fingerprints.hash(f));
         node.put("baselined", f.baselined());
         f.waiver().ifPresent(w -> node.putObject("waiver").put("reason", w.reason())

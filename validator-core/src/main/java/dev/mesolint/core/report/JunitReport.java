@@ -19,20 +19,19 @@ import javax.xml.stream.XMLStreamWriter;
 /**
  * JUnit XML for CI test views: a {@code testsuite} per programme file, a {@code testcase} per rule that ran on it.
  *
- * <p>A case fails when the rule reported active findings at or above the run's fail level; lower findings and waived
- * ones are listed in the case's {@code system-out}. A file that did not load is an {@code error} on the load-stage rule
+ * <p>A case fails when the rule reported active findings at or above the JUnit failure level (by default the run's
+ * fail level, so warnings fail their case exactly when they fail the run); lower findings and waived ones are listed
+ * in the case's {@code system-out}. Times are measured: a suite's is its file's whole check, a case's its rule's. A file that did not load is an {@code error} on the load-stage rule
  * that stopped it, and its other rules are {@code skipped}. Inputs that named nothing are suites with one error.
  */
 public final class JunitReport implements ReportWriter {
-    private static final String NO_TIME = "0.000";
-
     @Override
     public void write(ReportInput input, Writer out) throws IOException {
         List<Suite> suites = new ArrayList<>();
         input.run().files().forEach(f -> suites.add(suite(input, f)));
         input.run().missing().forEach(m -> suites.add(new Suite(m, List.of(new Case(m, "input", Outcome.ERROR,
                 "no such file or folder", "usage", "mesolint was asked to check " + m + ", which does not exist",
-                "")), "")));
+                "", Duration.ZERO)), "", Duration.ZERO)));
         try {
             XmlOut xml = new XmlOut(XMLOutputFactory.newFactory().createXMLStreamWriter(out));
             xml.start();
@@ -52,33 +51,36 @@ public final class JunitReport implements ReportWriter {
 
     private static Suite suite(ReportInput input, FileReport file) {
         boolean loaded = file.programme().isPresent();
+        Severity failAt = input.options().junitFailAt().orElse(input.run().failOn());
         List<Case> cases = new ArrayList<>();
         for (RuleDefinition rule : input.rulesRunUnder(file.profile())) {
             List<Finding> findings = file.findings().stream()
                     .filter(f -> f.ruleId().equals(rule.id()) && f.severity() != Severity.OFF).toList();
             List<Finding> active = findings.stream().filter(f -> !f.waived()).toList();
-            List<Finding> failing = active.stream().filter(f -> f.severity().atLeast(input.run().failOn())).toList();
+            List<Finding> failing = active.stream().filter(f -> f.severity().atLeast(failAt)).toList();
             String name = file.displayPath();
+            Duration time = file.timing().of(rule.id());
             if (!loaded && !active.isEmpty()) {
                 cases.add(new Case(name, rule.id(), Outcome.ERROR, headline(active), worst(active), list(active),
-                        ""));
+                        "", time));
             } else if (!loaded) {
-                cases.add(new Case(name, rule.id(), Outcome.SKIPPED, "not run: the file did not load", "", "", ""));
+                cases.add(new Case(name, rule.id(), Outcome.SKIPPED, "not run: the file did not load", "", "", "",
+                        time));
             } else if (!failing.isEmpty()) {
                 List<Finding> rest = findings.stream().filter(f -> !failing.contains(f)).toList();
                 cases.add(new Case(name, rule.id(), Outcome.FAILURE, headline(failing), worst(failing), list(failing),
-                        list(rest)));
+                        list(rest), time));
             } else {
-                cases.add(new Case(name, rule.id(), Outcome.PASSED, "", "", "", list(findings)));
+                cases.add(new Case(name, rule.id(), Outcome.PASSED, "", "", "", list(findings), time));
             }
         }
-        return new Suite(file.displayPath(), cases, file.profile());
+        return new Suite(file.displayPath(), cases, file.profile(), file.timing().total());
     }
 
     private static void writeSuite(XmlOut xml, Suite suite) throws XMLStreamException {
         xml.open("testsuite", 1, "name", suite.name(), "tests", suite.cases().size(), "failures",
                 suite.count(Outcome.FAILURE), "errors", suite.count(Outcome.ERROR), "skipped",
-                suite.count(Outcome.SKIPPED), "time", NO_TIME);
+                suite.count(Outcome.SKIPPED), "time", seconds(suite.time()));
         xml.open("properties", 2);
         xml.empty("property", 3, "name", "mesolint.version", "value", Mesolint.version());
         if (!suite.profile().isEmpty()) {
@@ -89,10 +91,12 @@ public final class JunitReport implements ReportWriter {
         for (Case c : suite.cases()) {
             boolean body = c.outcome() != Outcome.PASSED || !c.output().isEmpty();
             if (!body) {
-                xml.empty("testcase", 2, "classname", c.classname(), "name", c.name(), "time", NO_TIME);
+                xml.empty("testcase", 2, "classname", c.classname(), "name", c.name(), "file", c.classname(), "time",
+                        seconds(c.time()));
                 continue;
             }
-            xml.open("testcase", 2, "classname", c.classname(), "name", c.name(), "time", NO_TIME);
+            xml.open("testcase", 2, "classname", c.classname(), "name", c.name(), "file", c.classname(), "time",
+                    seconds(c.time()));
             switch (c.outcome()) {
                 case FAILURE -> xml.text("failure", 3, c.detail(), "message", c.message(), "type", c.type());
                 case ERROR -> xml.text("error", 3, c.detail(), "message", c.message(), "type", c.type());
@@ -146,10 +150,10 @@ public final class JunitReport implements ReportWriter {
     }
 
     private record Case(String classname, String name, Outcome outcome, String message, String type, String detail,
-            String output) {
+            String output, Duration time) {
     }
 
-    private record Suite(String name, List<Case> cases, String profile) {
+    private record Suite(String name, List<Case> cases, String profile, Duration time) {
         int count(Outcome outcome) {
             return (int) cases.stream().filter(c -> c.outcome() == outcome).count();
         }

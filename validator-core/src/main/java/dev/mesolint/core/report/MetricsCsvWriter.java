@@ -1,5 +1,6 @@
 package dev.mesolint.core.report;
 
+import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.EffortAgreement;
 import dev.mesolint.core.model.MuscleWeek;
@@ -22,7 +23,8 @@ import java.util.stream.Collectors;
  * </ul>
  *
  * <p>Comma-separated, CRLF line ends and quoting as in RFC 4180, a header row first, decimal points, an empty field
- * for a figure the model cannot know. Thread-safe.
+ * for a figure the model cannot know. The last row carries the caution in its first field, the others empty, so
+ * that the table keeps its shape and whoever opens it sees the caution. Thread-safe.
  */
 public final class MetricsCsvWriter {
 
@@ -47,6 +49,7 @@ public final class MetricsCsvWriter {
                 }
             }
         }
+        out.write(cautionRow(SET_COLUMNS.size()));
         out.flush();
     }
 
@@ -60,7 +63,15 @@ public final class MetricsCsvWriter {
                 }
             }
         }
+        out.write(cautionRow(MUSCLE_WEEK_COLUMNS.size()));
         out.flush();
+    }
+
+    /** The closing row: the caution, then empty fields up to the header's width. */
+    static String cautionRow(int columns) {
+        List<String> fields = new java.util.ArrayList<>(java.util.Collections.nCopies(columns, ""));
+        fields.set(0, "Caution: " + Mesolint.CAUTION);
+        return CsvRow.of(fields);
     }
 
     private static List<String> setRow(FileMetrics file, WeekMetrics week, SessionMetrics session, SetMetrics set) {

@@ -1,5 +1,6 @@
 package dev.mesolint.core.report;
 
+import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.EffortAgreement;
 import dev.mesolint.core.model.IntensityZone;
@@ -47,6 +48,7 @@ public final class MetricsJsonWriter {
     public ObjectNode toJson(List<FileMetrics> files) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", FORMAT);
+        root.put("caution", Mesolint.CAUTION);
         ArrayNode programmes = root.putArray("programmes");
         for (FileMetrics file : files) {
             ObjectNode p = programmes.addObject();

@@ -18,9 +18,15 @@ import java.util.Objects;
  * @param rules   every registered rule, in reference order (SARIF lists them all; JUnit has a case per rule run)
  * @param root    the folder that findings' paths are relative to
  * @param elapsed how long the run took; {@link Duration#ZERO} when not measured
+ * @param options how the front end wants the reports worded (help links, baseline, JUnit failures, git)
  */
 public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
-        ReportFigures figures, Duration elapsed) {
+        ReportFigures figures, Duration elapsed, ReportOptions options) {
+
+    public ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
+            ReportFigures figures, Duration elapsed) {
+        this(run, rules, configuration, root, figures, elapsed, ReportOptions.DEFAULTS);
+    }
 
     public ReportInput {
         Objects.requireNonNull(run, "run");
@@ -29,6 +35,7 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
         root = root.toAbsolutePath().normalize();
         Objects.requireNonNull(figures, "figures");
         Objects.requireNonNull(elapsed, "elapsed");
+        Objects.requireNonNull(options, "options");
     }
 
     /** Default configuration, no figures, duration not measured. */
@@ -37,15 +44,19 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
     }
 
     public ReportInput withConfiguration(RuleConfiguration newConfiguration) {
-        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed);
+        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed, options);
     }
 
     public ReportInput withFigures(ReportFigures newFigures) {
-        return new ReportInput(run, rules, configuration, root, newFigures, elapsed);
+        return new ReportInput(run, rules, configuration, root, newFigures, elapsed, options);
     }
 
     public ReportInput withElapsed(Duration newElapsed) {
-        return new ReportInput(run, rules, configuration, root, figures, newElapsed);
+        return new ReportInput(run, rules, configuration, root, figures, newElapsed, options);
+    }
+
+    public ReportInput withOptions(ReportOptions newOptions) {
+        return new ReportInput(run, rules, configuration, root, figures, elapsed, newOptions);
     }
 
     /** The rules that run on a file checked under {@code profile}: the registered rules that are not off there. */

@@ -7,6 +7,8 @@ import java.util.Objects;
  * A report to write: its format and its file, as given on the command line ({@code sarif=target/mesolint.sarif}).
  */
 public record ReportTarget(ReportFormat format, Path path) {
+    /** The path that stands for standard output, as in most command-line tools. */
+    public static final String STDOUT = "-";
 
     public ReportTarget {
         Objects.requireNonNull(format, "format");
@@ -28,6 +30,12 @@ public record ReportTarget(ReportFormat format, Path path) {
         ReportFormat format = ReportFormat.parse(name).orElseThrow(() -> new IllegalArgumentException(
                 "unknown report format '" + name + "'; use one of " + ReportFormat.names()));
         return new ReportTarget(format, Path.of(text.substring(eq + 1)));
+    }
+
+    /** True when the report goes to standard output: {@code -}, or {@code /dev/stdout} (which cannot be renamed over). */
+    public boolean toStdout() {
+        String p = path.toString();
+        return p.equals(STDOUT) || p.equals("/dev/stdout");
     }
 
     @Override

@@ -18,8 +18,11 @@ import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * SARIF 2.1.0: one run, every registered rule in {@code tool.driver.rules}, one result per reported finding (waived
- * ones carry an in-source suppression), paths relative to {@code %SRCROOT%}, the caution in the run's properties.
+ * SARIF 2.1.0: one run, every registered rule in {@code tool.driver.rules} with its reference page inline, one result
+ * per reported finding with its region and snippet (waived ones carry an in-source suppression), paths relative to
+ * {@code %SRCROOT%} (the repository root), git provenance when known, the caution in the run's and the driver's
+ * properties. {@code baselineState} appears only when a baseline was in force; {@code helpUri} only when the front
+ * end names where the reference pages are published.
  */
 public final class SarifReport implements ReportWriter {
     static final String SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
@@ -50,14 +53,23 @@ public final class SarifReport implements ReportWriter {
         ObjectNode run = log.putArray("runs").addObject();
         run.set("tool", tool(input));
         run.putArray("invocations").add(invocation(input));
+        run.putObject("automationDetails").put("id", "mesolint/check/" + input.options().revision().orElse(""));
+        input.options().revision().ifPresent(revision -> {
+            ObjectNode vcs = run.putArray("versionControlProvenance").addObject();
+            vcs.put("repositoryUri", input.options().repositoryUri().orElse(directoryUri(input)));
+            vcs.put("revisionId", revision);
+            input.options().branch().ifPresent(b -> vcs.put("branch", b));
+            vcs.putObject("mappedTo").put("uriBaseId", SRCROOT);
+        });
         run.putObject("originalUriBaseIds").putObject(SRCROOT)
                 .put("uri", directoryUri(input))
                 .putObject("description").put("text", "The folder that the checked programme paths are relative to.");
         ArrayNode results = run.putArray("results");
+        SourceLines sources = new SourceLines(input.root());
         for (FileReport file : input.run().files()) {
             for (Finding f : file.findings()) {
                 if (f.severity() != Severity.OFF) {
-                    results.add(result(input, f));
+                    results.add(result(input, f, sources));
                 }
             }
         }
@@ -75,37 +87,36 @@ public final class SarifReport implements ReportWriter {
     private static ObjectNode tool(ReportInput input) {
         ObjectNode driver = JsonText.object();
         driver.put("name", "mesolint");
+        driver.put("fullName", "mesolint " + Mesolint.version() + ", a checker for resistance-training programmes");
         driver.put("version", Mesolint.version());
         driver.put("semanticVersion", Mesolint.version());
-        driver.put("informationUri", Mesolint.INFORMATION_URI);
         driver.putObject("shortDescription").put("text",
                 "Checks resistance-training programmes written in YAML the way a compiler checks code.");
         driver.putObject("fullDescription").put("text",
                 "Checks resistance-training programmes written in YAML the way a compiler checks code. "
                         + Mesolint.CAUTION);
         ArrayNode rules = driver.putArray("rules");
-        input.rules().forEach(r -> rules.add(rule(r)));
+        input.rules().forEach(r -> rules.add(rule(r, input.options())));
+        driver.putObject("properties").put("caution", Mesolint.CAUTION);
         ObjectNode tool = JsonText.object();
         tool.set("driver", driver);
         return tool;
     }
 
-    static ObjectNode rule(RuleDefinition definition) {
+    static ObjectNode rule(RuleDefinition definition, ReportOptions options) {
         RuleMetadata m = definition.metadata();
         ObjectNode rule = JsonText.object();
         rule.put("id", m.id());
-        String name = pascalCase(m.id());
-        if (!name.equalsIgnoreCase(m.id())) {
-            // SARIF wants a readable name distinct from the id; a one-word id has none.
-            rule.put("name", name);
-        }
+        rule.put("name", pascalCase(m.id()));
         rule.putObject("shortDescription").put("text", m.summary());
         rule.putObject("fullDescription").put("text", m.rationale());
+        // The whole reference page inline: a dashboard shows it without any site to link to.
+        String markdown = RulePages.page(m.id()).orElse("**" + m.summary() + "**\n\n" + m.rationale()
+                + "\n\nSource: " + m.source() + "\n");
         rule.putObject("help")
-                .put("text", m.summary() + " " + m.rationale() + " Reference: " + RuleDocs.uri(m.id()))
-                .put("markdown", "**" + m.summary() + "**\n\n" + m.rationale() + "\n\nSource: " + m.source()
-                        + "\n\nSee [" + RuleDocs.path(m.id()) + "](" + RuleDocs.uri(m.id()) + ").");
-        rule.put("helpUri", RuleDocs.uri(m.id()));
+                .put("text", m.summary() + " " + m.rationale() + " Source: " + m.source() + " " + Mesolint.CAUTION)
+                .put("markdown", markdown);
+        options.helpUri(m.id()).ifPresent(uri -> rule.put("helpUri", uri));
         rule.putObject("defaultConfiguration").put("level", level(m.defaultSeverity()));
         ObjectNode properties = rule.putObject("properties");
         properties.put("category", m.category().name().toLowerCase(Locale.ROOT));
@@ -121,7 +132,7 @@ public final class SarifReport implements ReportWriter {
         return rule;
     }
 
-    private static ObjectNode result(ReportInput input, Finding f) {
+    private static ObjectNode result(ReportInput input, Finding f, SourceLines sources) {
         ObjectNode result = JsonText.object();
         result.put("ruleId", f.ruleId());
         int index = input.ruleIndex(f.ruleId());
@@ -133,13 +144,17 @@ public final class SarifReport implements ReportWriter {
         ObjectNode location = result.putArray("locations").addObject();
         ObjectNode physical = location.putObject("physicalLocation");
         physical.set("artifactLocation", artifactLocation(f.file()));
-        physical.putObject("region").put("startLine", f.location().line()).put("startColumn", f.location().column());
+        ObjectNode region = physical.putObject("region").put("startLine", f.location().line())
+                .put("startColumn", f.location().column());
+        sources.line(f.file(), f.location().line()).ifPresent(text -> region.putObject("snippet").put("text", text));
         if (!f.location().pointer().isEmpty()) {
             location.putArray("logicalLocations").addObject()
                     .put("fullyQualifiedName", f.location().pointer()).put("kind", "element");
         }
         result.putObject("partialFingerprints").put(FINGERPRINT_KEY, Fingerprints.hash(f));
-        result.put("baselineState", f.baselined() ? "unchanged" : "new");
+        if (input.options().baselineInForce()) {
+            result.put("baselineState", f.baselined() ? "unchanged" : "new");
+        }
         f.waiver().ifPresent(w -> {
             ObjectNode suppression = result.putArray("suppressions").addObject();
             suppression.put("kind", "inSource");

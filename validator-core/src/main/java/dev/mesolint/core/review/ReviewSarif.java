@@ -2,6 +2,7 @@ package dev.mesolint.core.review;
 
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.SarifReport;
 import java.io.IOException;
 import java.io.Writer;
@@ -19,6 +20,6 @@ public final class ReviewSarif implements ReviewWriter {
         Review review = input.review();
         List<Finding> resolved = review.programmes().stream().flatMap(p -> p.findings().resolved().stream()).toList();
         new SarifReport(resolved).write(ReportInput.of(NewSinceGate.markUnchanged(review), input.rules(),
-                input.root()), out);
+                input.root()).withOptions(ReportOptions.DEFAULTS.withBaselineInForce(true)), out);
     }
 }

@@ -62,7 +62,8 @@ class JunitReportTests {
         assertEquals("0", a.getAttribute("errors"));
         for (Element c : elements(a, "testcase")) {
             assertEquals("programmes/a.yaml", c.getAttribute("classname"));
-            assertEquals("0.000", c.getAttribute("time"));
+            assertEquals("programmes/a.yaml", c.getAttribute("file"));
+            assertEquals("0.000", c.getAttribute("time"), "a hand-made run has no measured times");
         }
         Element failure = elements(testcase(a, "week-sequence"), "failure").get(0);
         assertEquals("error", failure.getAttribute("type"));
@@ -92,6 +93,31 @@ class JunitReportTests {
         Element unused = elements(testcase(a, "unused-waiver"), "failure").get(0);
         assertEquals("warning", unused.getAttribute("type"));
         assertTrue(!unused.getTextContent().contains("waived"), "the waived finding is not a failure");
+    }
+
+    @Test
+    void warningsFailTheirCaseWhenTheJunitLevelSaysSoWhateverTheRunsFailLevel() throws Exception {
+        ReportInput input = ReportFixtures.input(ReportFixtures.handMadeRun(Severity.ERROR))
+                .withOptions(ReportOptions.DEFAULTS.withJunitFailAt(java.util.Optional.of(Severity.WARNING)));
+        Element a = elements(parse(input).getDocumentElement(), "testsuite").get(0);
+        assertEquals("2", a.getAttribute("failures"), "the error and the warning fail; the info does not");
+        assertEquals("warning", elements(testcase(a, "unused-waiver"), "failure").get(0).getAttribute("type"));
+    }
+
+    @Test
+    void timesAreMeasuredForEachFileAndRule() throws Exception {
+        RunReport checked = ReportFixtures.check("sample-programs/programmes");
+        double longest = 0;
+        for (Element suite : elements(parse(ReportFixtures.input(checked)).getDocumentElement(), "testsuite")) {
+            double total = Double.parseDouble(suite.getAttribute("time"));
+            double rules = elements(suite, "testcase").stream()
+                    .mapToDouble(c -> Double.parseDouble(c.getAttribute("time"))).sum();
+            // A file's time covers reading, schema, model and every rule, so it is never below the rules' sum
+            // (each value is rounded to a millisecond).
+            longest = Math.max(longest, total);
+            assertTrue(total + 0.0005 * elements(suite, "testcase").size() >= rules, suite.getAttribute("name"));
+        }
+        assertTrue(longest > 0, "the files' times are measured, not written as zero");
     }
 
     @Test

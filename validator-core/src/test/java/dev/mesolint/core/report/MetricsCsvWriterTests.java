@@ -27,7 +27,10 @@ class MetricsCsvWriterTests {
         long sets = METRICS.weeks().stream().flatMap(w -> w.sessions().stream()).mapToLong(s -> s.sets().size())
                 .sum();
         assertEquals(String.join(",", MetricsCsvWriter.SET_COLUMNS), lines.get(0));
-        assertEquals(sets + 1, lines.size());
+        assertEquals(sets + 2, lines.size(), "the header, a row per set, the caution");
+        assertEquals(MetricsCsvWriter.cautionRow(MetricsCsvWriter.SET_COLUMNS.size()).strip(),
+                lines.get(lines.size() - 1));
+        assertTrue(lines.get(lines.size() - 1).contains("not a medical assessment"));
         assertTrue(out.toString().endsWith("\r\n"), "RFC 4180 record ends");
         // First set: bench press, 8 reps at RIR 2: 3 stimulating reps (common practice).
         List<String> first = Arrays.asList(lines.get(1).split(",", -1));
@@ -62,7 +65,7 @@ class MetricsCsvWriterTests {
         new MetricsCsvWriter().writeMuscleWeeks(List.of(new FileMetrics("harbour.yaml", METRICS)), out);
         List<String> lines = lines(out.toString());
         long rows = METRICS.weeks().stream().mapToLong(w -> w.muscles().size()).sum();
-        assertEquals(rows + 1, lines.size());
+        assertEquals(rows + 2, lines.size(), "the header, a row per week and muscle, the caution");
         String chestWeek2 = lines.stream().filter(l -> l.startsWith("harbour.yaml,harbour-test-block,2,true,chest,"))
                 .findFirst().orElseThrow();
         List<String> fields = Arrays.asList(chestWeek2.split(",", -1));

@@ -18,6 +18,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
@@ -40,8 +41,13 @@ class SarifReportTests {
         JsonNode driver = log.at("/runs/0/tool/driver");
         assertEquals("mesolint", driver.get("name").asString());
         assertEquals(Mesolint.version(), driver.get("version").asString());
-        assertEquals(Mesolint.INFORMATION_URI, driver.get("informationUri").asString());
+        assertTrue(driver.get("fullName").asString().startsWith("mesolint " + Mesolint.version()));
+        // No site is promised: no informationUri, no helpUri unless the front end names a base.
+        assertFalse(driver.has("informationUri"));
         assertTrue(driver.at("/fullDescription/text").asString().contains(Mesolint.CAUTION));
+        assertEquals(Mesolint.CAUTION, driver.at("/properties/caution").asString());
+        assertEquals("mesolint/check/", log.at("/runs/0/automationDetails/id").asString());
+        assertFalse(log.at("/runs/0").has("versionControlProvenance"), "no git revision was given");
         assertEquals(Mesolint.CAUTION, log.at("/runs/0/properties/caution").asString());
     }
 
@@ -57,10 +63,12 @@ class SarifReportTests {
             assertEquals(m.id(), rule.get("id").asString());
             assertEquals(m.summary(), rule.at("/shortDescription/text").asString());
             assertEquals(m.rationale(), rule.at("/fullDescription/text").asString());
-            String uri = Mesolint.INFORMATION_URI + "/docs/rules/" + m.id() + ".md";
-            assertEquals(uri, rule.get("helpUri").asString());
-            assertTrue(rule.at("/help/markdown").asString().contains("[docs/rules/" + m.id() + ".md](" + uri + ")"));
-            assertFalse(rule.at("/help/text").asString().isBlank());
+            assertEquals(SarifReport.pascalCase(m.id()), rule.get("name").asString(), "every rule has a name");
+            assertFalse(rule.has("helpUri"));
+            // The rule's whole reference page, inline: the generated page starts with its id as the title.
+            assertTrue(rule.at("/help/markdown").asString().startsWith("# " + m.id() + "\n"),
+                    rule.at("/help/markdown").asString());
+            assertTrue(rule.at("/help/text").asString().contains(m.rationale()));
             assertEquals(SarifReport.level(m.defaultSeverity()), rule.at("/defaultConfiguration/level").asString());
         }
     }
@@ -83,7 +91,7 @@ class SarifReportTests {
             assertEquals(r.get("ruleId").asString(), rules.get(r.get("ruleIndex").asInt()).get("id").asString());
             assertEquals("%SRCROOT%", r.at("/locations/0/physicalLocation/artifactLocation/uriBaseId").asString());
             assertTrue(r.at("/partialFingerprints").get(SarifReport.FINGERPRINT_KEY).asString().matches("[0-9a-f]{64}"));
-            assertEquals("new", r.get("baselineState").asString());
+            assertFalse(r.has("baselineState"), "no baseline was in force");
         }
         JsonNode first = results.get(0);
         assertEquals("unused-waiver", first.get("ruleId").asString(), "a.yaml's findings come in line order");
@@ -92,6 +100,8 @@ class SarifReportTests {
         assertEquals("programmes/a.yaml", error.at("/locations/0/physicalLocation/artifactLocation/uri").asString());
         assertEquals(41, error.at("/locations/0/physicalLocation/region/startLine").asInt());
         assertEquals(7, error.at("/locations/0/physicalLocation/region/startColumn").asInt());
+        assertFalse(error.at("/locations/0/physicalLocation/region").has("snippet"),
+                "programmes/a.yaml is made up: there is no line to quote");
         assertEquals("week 4 follows week 2: week 3 is missing. Fix: fix for week 4 follows week 2: week 3 is missing.",
                 error.at("/message/text").asString());
         assertEquals("note", find(results, "unknown-exercise").get("level").asString());
@@ -122,8 +132,8 @@ class SarifReportTests {
         RunReport run = ReportFixtures.handMadeRun(Severity.ERROR);
         Finding error = run.files().get(0).findings().stream().filter(f -> f.ruleId().equals("week-sequence"))
                 .findFirst().orElseThrow();
-        JsonNode results = sarif(ReportFixtures.input(ReportFixtures.baselining(run, Set.of(error.fingerprint()))))
-                .at("/runs/0/results");
+        JsonNode results = sarif(ReportFixtures.input(ReportFixtures.baselining(run, Set.of(error.fingerprint())))
+                .withOptions(ReportOptions.DEFAULTS.withBaselineInForce(true))).at("/runs/0/results");
         assertEquals("unchanged", find(results, "week-sequence").get("baselineState").asString());
         assertEquals("new", find(results, "schema").get("baselineState").asString());
 
@@ -143,6 +153,33 @@ class SarifReportTests {
         assertEquals(run.active().size(), results.size());
         assertEquals("sample-programs/broken/yaml-syntax.yaml",
                 find(results, "yaml-syntax").at("/locations/0/physicalLocation/artifactLocation/uri").asString());
+        // The snippet is the finding's line as written in the file.
+        JsonNode week = find(results, "week-sequence").at("/locations/0/physicalLocation/region");
+        List<String> lines;
+        try {
+            lines = Files.readAllLines(ReportFixtures.ROOT.resolve("sample-programs/broken/week-sequence.yaml"));
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        assertEquals(lines.get(week.get("startLine").asInt() - 1), week.at("/snippet/text").asString());
+    }
+
+    @Test
+    void helpLinksAndGitProvenanceAppearOnlyWhenTheFrontEndGivesThem() {
+        ReportOptions options = ReportOptions.DEFAULTS.withHelpUriBase(Optional.of("https://docs.example.org/rules"))
+                .withGit(Optional.of("0123456789abcdef0123456789abcdef01234567"), Optional.of("main"),
+                        Optional.of("https://git.example.org/harbourside/programmes.git"));
+        JsonNode run = sarif(ReportFixtures.input(ReportFixtures.handMadeRun(Severity.ERROR)).withOptions(options))
+                .at("/runs/0");
+        assertEquals("https://docs.example.org/rules/week-sequence.md",
+                find(run.at("/tool/driver/rules"), "id", "week-sequence").get("helpUri").asString());
+        JsonNode vcs = run.at("/versionControlProvenance/0");
+        assertEquals("https://git.example.org/harbourside/programmes.git", vcs.get("repositoryUri").asString());
+        assertEquals("0123456789abcdef0123456789abcdef01234567", vcs.get("revisionId").asString());
+        assertEquals("main", vcs.get("branch").asString());
+        assertEquals("%SRCROOT%", vcs.at("/mappedTo/uriBaseId").asString());
+        assertEquals("mesolint/check/0123456789abcdef0123456789abcdef01234567",
+                run.at("/automationDetails/id").asString());
     }
 
     @Test
@@ -177,11 +214,15 @@ class SarifReportTests {
     }
 
     private static JsonNode find(JsonNode results, String ruleId) {
-        for (JsonNode r : results) {
-            if (r.get("ruleId").asString().equals(ruleId)) {
+        return find(results, "ruleId", ruleId);
+    }
+
+    private static JsonNode find(JsonNode nodes, String key, String value) {
+        for (JsonNode r : nodes) {
+            if (r.get(key).asString().equals(value)) {
                 return r;
             }
         }
-        throw new AssertionError("no result of " + ruleId);
+        throw new AssertionError("no entry with " + key + " " + value);
     }
 }
