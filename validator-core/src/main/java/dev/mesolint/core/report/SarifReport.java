@@ -73,8 +73,9 @@ public final class SarifReport implements ReportWriter {
                 }
             }
         }
+        // Resolved findings are located in the base revision's files, which are not on disk: no snippets.
         for (Finding f : absent) {
-            results.add(result(input, f).put("baselineState", "absent"));
+            results.add(result(input, f, SourceLines.none()).put("baselineState", "absent"));
         }
         run.put("columnKind", "unicodeCodePoints");
         ObjectNode properties = run.putObject("properties");
