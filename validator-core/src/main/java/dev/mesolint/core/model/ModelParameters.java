@@ -1,5 +1,6 @@
 package dev.mesolint.core.model;
 
+import java.util.Map;
 import java.util.Objects;
 
 /**
@@ -89,51 +90,93 @@ public record ModelParameters(
         double intensityZone4From,
         double heavyRepsFrom) {
 
+    /**
+     * The allowed range of every numeric parameter, by its name: the one place the bounds live, read by the
+     * constructor and by anything (rule profiles) that sets parameters by name.
+     */
+    public static final Map<String, ParameterBound> BOUNDS = Map.ofEntries(
+            Map.entry("effortToleranceReps", new ParameterBound(0, 6)),
+            Map.entry("hardSetMaxRir", new ParameterBound(0, 5)),
+            Map.entry("amrapDefaultReps", new ParameterBound(1, 50)),
+            Map.entry("stimulatingRepsCeiling", new ParameterBound(4, 6)),
+            Map.entry("stimulatingRepsTail", new ParameterBound(0.5, 1.6)),
+            Map.entry("recruitmentFloor", new ParameterBound(0, 0.6)),
+            Map.entry("fatiguePerRep", new ParameterBound(0.005, 0.1)),
+            Map.entry("proximityDecay", new ParameterBound(0, 1)),
+            Map.entry("highRepThreshold", new ParameterBound(8, 30)),
+            Map.entry("highRepExtraWeight", new ParameterBound(0, 3)),
+            Map.entry("compoundFatigueFactor", new ParameterBound(1, 2)),
+            Map.entry("lowerBodyRecoveryFactor", new ParameterBound(1, 2)),
+            Map.entry("recoveryTimeConstantSeconds", new ParameterBound(20, 600)),
+            Map.entry("techniqueFatigueFactor", new ParameterBound(1, 3)),
+            Map.entry("dropSets", new ParameterBound(1, 4)),
+            Map.entry("dropSetExtraReps", new ParameterBound(1, 20)),
+            Map.entry("dropSetLoadDrop", new ParameterBound(0.05, 0.5)),
+            Map.entry("dropSetPauseSeconds", new ParameterBound(0, 60)),
+            Map.entry("restPauseMiniSets", new ParameterBound(1, 5)),
+            Map.entry("restPauseMiniSetReps", new ParameterBound(1, 10)),
+            Map.entry("restPausePauseSeconds", new ParameterBound(5, 60)),
+            Map.entry("sessionPlateauSets", new ParameterBound(6, 20)),
+            Map.entry("sessionPlateauSharpness", new ParameterBound(1, 8)),
+            Map.entry("weeklyDoseExponent", new ParameterBound(0.2, 0.8)),
+            Map.entry("defaultRestSeconds", new ParameterBound(15, 600)),
+            Map.entry("supersetChangeoverSeconds", new ParameterBound(0, 120)),
+            Map.entry("defaultRepSeconds", new ParameterBound(1, 10)),
+            Map.entry("warmUpSetMinutes", new ParameterBound(0, 5)),
+            Map.entry("exerciseChangeoverMinutes", new ParameterBound(0, 5)),
+            Map.entry("hardSessionMinSets", new ParameterBound(0.5, 5)),
+            Map.entry("acuteChronicWeeks", new ParameterBound(1, 8)),
+            Map.entry("intensityZone1From", new ParameterBound(0.3, 1.0)),
+            Map.entry("intensityZone2From", new ParameterBound(0.3, 1.0)),
+            Map.entry("intensityZone3From", new ParameterBound(0.3, 1.0)),
+            Map.entry("intensityZone4From", new ParameterBound(0.3, 1.0)),
+            Map.entry("heavyRepsFrom", new ParameterBound(0.5, 1.0)));
+
     private static final ModelParameters DEFAULTS = new Builder().build();
 
     public ModelParameters {
         Objects.requireNonNull(oneRepMaxRelation, "oneRepMaxRelation");
-        within("effortToleranceReps", effortToleranceReps, 0, 6);
-        within("hardSetMaxRir", hardSetMaxRir, 0, 5);
-        within("amrapDefaultReps", amrapDefaultReps, 1, 50);
-        within("stimulatingRepsCeiling", stimulatingRepsCeiling, 4, 6);
-        within("stimulatingRepsTail", stimulatingRepsTail, 0.5, 1.6);
-        within("recruitmentFloor", recruitmentFloor, 0, 0.6);
-        within("fatiguePerRep", fatiguePerRep, 0.005, 0.1);
-        within("proximityDecay", proximityDecay, 0, 1);
-        within("highRepThreshold", highRepThreshold, 8, 30);
-        within("highRepExtraWeight", highRepExtraWeight, 0, 3);
-        within("compoundFatigueFactor", compoundFatigueFactor, 1, 2);
-        within("lowerBodyRecoveryFactor", lowerBodyRecoveryFactor, 1, 2);
-        within("recoveryTimeConstantSeconds", recoveryTimeConstantSeconds, 20, 600);
-        within("techniqueFatigueFactor", techniqueFatigueFactor, 1, 3);
-        within("dropSets", dropSets, 1, 4);
-        within("dropSetExtraReps", dropSetExtraReps, 1, 20);
-        within("dropSetLoadDrop", dropSetLoadDrop, 0.05, 0.5);
-        within("dropSetPauseSeconds", dropSetPauseSeconds, 0, 60);
-        within("restPauseMiniSets", restPauseMiniSets, 1, 5);
-        within("restPauseMiniSetReps", restPauseMiniSetReps, 1, 10);
-        within("restPausePauseSeconds", restPausePauseSeconds, 5, 60);
-        within("sessionPlateauSets", sessionPlateauSets, 6, 20);
-        within("sessionPlateauSharpness", sessionPlateauSharpness, 1, 8);
-        within("weeklyDoseExponent", weeklyDoseExponent, 0.2, 0.8);
-        within("defaultRestSeconds", defaultRestSeconds, 15, 600);
-        within("supersetChangeoverSeconds", supersetChangeoverSeconds, 0, 120);
-        within("defaultRepSeconds", defaultRepSeconds, 1, 10);
-        within("warmUpSetMinutes", warmUpSetMinutes, 0, 5);
-        within("exerciseChangeoverMinutes", exerciseChangeoverMinutes, 0, 5);
-        within("hardSessionMinSets", hardSessionMinSets, 0.5, 5);
-        within("acuteChronicWeeks", acuteChronicWeeks, 1, 8);
-        within("intensityZone1From", intensityZone1From, 0.3, 1.0);
-        within("intensityZone2From", intensityZone2From, 0.3, 1.0);
-        within("intensityZone3From", intensityZone3From, 0.3, 1.0);
-        within("intensityZone4From", intensityZone4From, 0.3, 1.0);
+        within("effortToleranceReps", effortToleranceReps);
+        within("hardSetMaxRir", hardSetMaxRir);
+        within("amrapDefaultReps", amrapDefaultReps);
+        within("stimulatingRepsCeiling", stimulatingRepsCeiling);
+        within("stimulatingRepsTail", stimulatingRepsTail);
+        within("recruitmentFloor", recruitmentFloor);
+        within("fatiguePerRep", fatiguePerRep);
+        within("proximityDecay", proximityDecay);
+        within("highRepThreshold", highRepThreshold);
+        within("highRepExtraWeight", highRepExtraWeight);
+        within("compoundFatigueFactor", compoundFatigueFactor);
+        within("lowerBodyRecoveryFactor", lowerBodyRecoveryFactor);
+        within("recoveryTimeConstantSeconds", recoveryTimeConstantSeconds);
+        within("techniqueFatigueFactor", techniqueFatigueFactor);
+        within("dropSets", dropSets);
+        within("dropSetExtraReps", dropSetExtraReps);
+        within("dropSetLoadDrop", dropSetLoadDrop);
+        within("dropSetPauseSeconds", dropSetPauseSeconds);
+        within("restPauseMiniSets", restPauseMiniSets);
+        within("restPauseMiniSetReps", restPauseMiniSetReps);
+        within("restPausePauseSeconds", restPausePauseSeconds);
+        within("sessionPlateauSets", sessionPlateauSets);
+        within("sessionPlateauSharpness", sessionPlateauSharpness);
+        within("weeklyDoseExponent", weeklyDoseExponent);
+        within("defaultRestSeconds", defaultRestSeconds);
+        within("supersetChangeoverSeconds", supersetChangeoverSeconds);
+        within("defaultRepSeconds", defaultRepSeconds);
+        within("warmUpSetMinutes", warmUpSetMinutes);
+        within("exerciseChangeoverMinutes", exerciseChangeoverMinutes);
+        within("hardSessionMinSets", hardSessionMinSets);
+        within("acuteChronicWeeks", acuteChronicWeeks);
+        within("intensityZone1From", intensityZone1From);
+        within("intensityZone2From", intensityZone2From);
+        within("intensityZone3From", intensityZone3From);
+        within("intensityZone4From", intensityZone4From);
         if (!(intensityZone1From < intensityZone2From && intensityZone2From < intensityZone3From
                 && intensityZone3From < intensityZone4From)) {
             throw new IllegalArgumentException("intensity zone bounds must rise, were " + intensityZone1From + ", "
                     + intensityZone2From + ", " + intensityZone3From + ", " + intensityZone4From);
         }
-        within("heavyRepsFrom", heavyRepsFrom, 0.5, 1.0);
+        within("heavyRepsFrom", heavyRepsFrom);
     }
 
     /** The documented defaults. */
@@ -146,9 +189,11 @@ public record ModelParameters(
         return new Builder(this);
     }
 
-    private static void within(String name, double value, double min, double max) {
-        if (!(value >= min && value <= max)) {
-            throw new IllegalArgumentException(name + " must lie in [" + min + ", " + max + "], was " + value);
+    private static void within(String name, double value) {
+        ParameterBound bound = BOUNDS.get(name);
+        if (!bound.contains(value)) {
+            throw new IllegalArgumentException(name + " must lie in [" + bound.min() + ", " + bound.max() + "], was "
+                    + value);
         }
     }
 

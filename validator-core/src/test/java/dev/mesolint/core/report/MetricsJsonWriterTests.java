@@ -109,6 +109,13 @@ class MetricsJsonWriterTests {
     }
 
     @Test
+    void theFiguresCarryTheCaution() {
+        // House rule: every report, machine-readable ones too, carries the caution.
+        assertEquals(dev.mesolint.core.Mesolint.CAUTION, written.get("caution").asString());
+        assertTrue(written.get("caution").asString().contains("PAR-Q+"));
+    }
+
+    @Test
     void eachWeekAndSessionListsItsLiftsStrengthFigures() {
         JsonNode week = written.get("programmes").get(0).get("weeks").get(0);
         JsonNode bench = week.get("lifts").get(0);
