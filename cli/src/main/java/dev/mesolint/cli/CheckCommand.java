@@ -9,6 +9,7 @@ import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
+import dev.mesolint.core.report.HtmlOptions;
 import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportOptions;
@@ -87,9 +88,14 @@ final class CheckCommand implements Callable<Integer> {
     boolean showWaived;
 
     @Option(names = "--report", paramLabel = "FORMAT=PATH", converter = ReportTargetConverter.class,
-            description = {"Also write a report (repeatable). FORMAT is one of: console, json, sarif, junit, html.",
+            description = {"Also write a report (repeatable). FORMAT is one of: console, json, sarif, junit, html, "
+                    + "html-sheet (the athlete's sheet: the prescription with loads, a week per printed page).",
                 "e.g. --report sarif=target/mesolint.sarif --report html=target/mesolint.html"})
     List<ReportTarget> reports = new ArrayList<>();
+
+    @Option(names = "--no-reasons", description = "Leave the reasons of the athlete's constraints (health data) out "
+            + "of the HTML report, e.g. for a report that will be shared.")
+    boolean noReasons;
 
     @Option(names = "--help-uri-base", paramLabel = "URL",
             description = "Where your team publishes the rule reference pages (docs/rules): reports link each rule "
@@ -119,14 +125,16 @@ final class CheckCommand implements Callable<Integer> {
         Workspace workspace;
         CheckRequest request;
         InstalledRules installed;
+        Checker checker;
         long started = System.nanoTime();
         try {
             installed = Installed.rules();
             workspace = Workspace.open(options.toRunOptions(located, catalogues.files, level,
                     Optional.ofNullable(baseline)), installed.rules());
             request = workspace.request(piped.isPresent() ? List.of() : paths);
-            Checker checker = new Checker(request, installed.rules());
-            report = piped.map(d -> checker.run(d.path(), d.content())).orElseGet(checker::run);
+            Checker built = new Checker(request, installed.rules());
+            checker = built;
+            report = piped.map(d -> built.run(d.path(), d.content())).orElseGet(built::run);
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }
@@ -140,7 +148,10 @@ final class CheckCommand implements Callable<Integer> {
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
                 .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent())
                 .withJunitFailAt(junitLevel);
-        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording);
+        HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
+                .withReasons(!noReasons).withCatalogue(checker.catalogue());
+        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording)
+                .withHtml(coach);
         if (stdoutFormat == ReportFormat.CONSOLE) {
             if (!report.files().isEmpty() || report.missing().isEmpty()) {
                 output.console(showWaived).write(report, cli.getOut());

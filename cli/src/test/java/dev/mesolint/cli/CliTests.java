@@ -90,7 +90,8 @@ class CliTests {
         Run r = run("check", "--root", rootArg(), root.resolve("programmes").toString());
         assertEquals(2, r.exit());
         assertEquals("mesolint: .mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: "
-                + "did you mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root)\n",
+                + "did you mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
+                + "plate-increment)\n",
                 r.err());
         assertFalse(r.err().contains("Exception"), r.err());
 

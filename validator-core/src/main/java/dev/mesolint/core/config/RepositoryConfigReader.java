@@ -3,6 +3,8 @@ package dev.mesolint.core.config;
 import dev.mesolint.core.catalogue.Named;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.Goal;
+import dev.mesolint.core.value.InvalidValueException;
+import dev.mesolint.core.value.Load;
 import dev.mesolint.core.yaml.Pointers;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -15,7 +17,8 @@ import tools.jackson.databind.JsonNode;
 
 /** Reads and checks the repository configuration file; every problem is located at the key or value at fault. */
 public final class RepositoryConfigReader {
-    static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline", "root");
+    static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline", "root",
+            "plate-increment");
     private static final List<String> FOLDER_KEYS = List.of("match", "profile");
     private static final String EXAMPLE = "folders: [{match: rehab/, profile: profiles/rehab.yaml}]";
 
@@ -67,7 +70,23 @@ public final class RepositoryConfigReader {
         }
         return new RepositoryConfig(Optional.of(file.toAbsolutePath().normalize()), profile,
                 goals(doc, root.get("goals"), base), folders(doc, root.get("folders"), base),
-                catalogues(doc, root.get("catalogues"), base), failOn, baseline);
+                catalogues(doc, root.get("catalogues"), base), failOn, baseline, plateIncrement(doc, root));
+    }
+
+    private static Optional<Load.Absolute> plateIncrement(ConfigDocument doc, JsonNode root) throws ConfigProblem {
+        if (!root.has("plate-increment")) {
+            return Optional.empty();
+        }
+        String text = doc.scalar(root.get("plate-increment"), "/plate-increment", "plate-increment: 2.5kg");
+        try {
+            if (Load.parse(text) instanceof Load.Absolute step) {
+                return Optional.of(step);
+            }
+        } catch (InvalidValueException e) {
+            // reported below with the configuration's own hint
+        }
+        throw doc.problemAt("/plate-increment", "plate-increment '" + text + "' is not a weight",
+                "write the smallest loading step with its unit: plate-increment: 2.5kg (or 5lb)");
     }
 
     private static ProfileRef ref(ConfigDocument doc, JsonNode node, String pointer, Path base) throws ConfigProblem {

@@ -48,7 +48,9 @@ public final class ProgrammeBinder {
                 BindContext.text(header, "author"),
                 CatalogueEntryBinder.named(Level.class, header.get("level").asString()),
                 CatalogueEntryBinder.named(Goal.class, header.get("goal").asString()),
-                minutes == null ? Optional.empty() : Optional.of(minutes.doubleValue()), units, ctx.at("/programme"));
+                minutes == null ? Optional.empty() : Optional.of(minutes.doubleValue()), units,
+                ctx.value(header, "/programme", "plate-increment", Load::parse).map(l -> (Load.Absolute) l),
+                ctx.at("/programme"));
         Athlete athlete = athlete(ctx, root.get("athlete"));
         List<Exercise> local = CatalogueEntryBinder.readAll(ctx, root.get("exercises"), "/exercises", "programme");
         List<Waiver> fileWaivers = WaiverBinder.read(ctx, root, "", List.of(), true);

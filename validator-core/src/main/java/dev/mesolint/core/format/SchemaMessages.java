@@ -20,7 +20,7 @@ import tools.jackson.databind.JsonNode;
 final class SchemaMessages {
     /** Every key the programme format knows, for "did you mean" on misspelt keys. */
     private static final List<String> KNOWN_KEYS = List.of("format", "programme", "id", "title", "author", "level",
-            "goal", "session-minutes", "units", "athlete", "name", "one-rep-max", "constraints", "region", "max-load",
+            "goal", "session-minutes", "plate-increment", "units", "athlete", "name", "one-rep-max", "constraints", "region", "max-load",
             "avoid", "reason", "exercises", "kind", "pattern", "stability", "skill", "muscles", "regions", "waive", "rule",
             "weeks", "week", "deload", "repeat", "adjust", "only", "sessions", "day", "work", "exercise", "warm-up",
             "sets", "reps", "rir", "rpe", "load", "rest", "tempo", "technique", "superset", "rounds", "items", "note");

@@ -11,23 +11,33 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.SortedSet;
+import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Sorts a file's findings into the week and session they are about, for the HTML report.
+ * Sorts a file's findings into the weeks and session they are about, for the HTML report.
  *
- * <p>The week comes from the message ("week 3 ...") when it names one, else from the first week whose written
- * YAML node contains the finding's pointer; the session is the one of that week whose node contains the pointer (a
- * repeated week shares the nodes of the week it repeats), else the day the message names. Findings about neither go to
- * the whole-programme group.
+ * <p>The weeks are those the message names ({@code weeks 5-7}), else the first week whose written YAML node contains
+ * the finding's pointer; the session is the one of the first of those weeks whose node contains the pointer (a
+ * repeated week shares the nodes of the week it repeats), else the day the message names. A finding about weeks 5-7
+ * is grouped under "Weeks 5-7", never under week 1 whose lines those weeks repeat. Findings about no week go to the
+ * whole-programme group.
  */
 final class FindingGroups {
-    private static final Pattern WEEK = Pattern.compile("\\bweek (\\d+)\\b", Pattern.CASE_INSENSITIVE);
     private static final Pattern DAY = Pattern.compile("\\bday (\\d+)\\b", Pattern.CASE_INSENSITIVE);
 
-    /** One group: {@code week} and {@code day} are null for the whole programme, {@code day} null for a whole week. */
-    record Group(Integer week, Integer day, String title, List<Finding> findings) {
+    /**
+     * One group: {@code weeks} empty for the whole programme, {@code day} null for whole weeks.
+     *
+     * @param weeks the weeks the group's findings are about, in order
+     */
+    record Group(SortedSet<Integer> weeks, Integer day, String title, List<Finding> findings) {
+        /** The first week, or null for the whole programme. */
+        Integer week() {
+            return weeks.isEmpty() ? null : weeks.first();
+        }
     }
 
     private FindingGroups() {
@@ -37,50 +47,54 @@ final class FindingGroups {
         Map<String, Group> groups = new LinkedHashMap<>();
         for (Finding f : findings) {
             Place place = place(file.programme(), f);
-            String key = place.week + "/" + place.day + "/" + place.session;
-            groups.computeIfAbsent(key, k -> new Group(place.week, place.day, title(file.programme(), place),
+            String key = place.weeks + "/" + place.day + "/" + place.session;
+            groups.computeIfAbsent(key, k -> new Group(place.weeks, place.day, title(file.programme(), place),
                     new ArrayList<>())).findings().add(f);
         }
         List<Group> sorted = new ArrayList<>(groups.values());
         sorted.sort(Comparator.comparing(Group::week, Comparator.nullsFirst(Comparator.naturalOrder()))
+                .thenComparing(g -> g.weeks().size())
                 .thenComparing(Group::day, Comparator.nullsFirst(Comparator.naturalOrder())));
-        return sorted.stream().map(g -> new Group(g.week(), g.day(), g.title(), List.copyOf(g.findings()))).toList();
+        return sorted.stream().map(g -> new Group(g.weeks(), g.day(), g.title(), List.copyOf(g.findings()))).toList();
     }
 
     /** Where a finding belongs; {@code session} is the label of the session found by pointer, if any. */
-    record Place(Integer week, Integer day, String session) {
+    record Place(SortedSet<Integer> weeks, Integer day, String session) {
     }
 
     static Place place(Optional<Programme> programme, Finding f) {
-        Integer named = number(WEEK, f.message());
+        SortedSet<Integer> named = FindingWeeks.of(f);
         Integer namedDay = number(DAY, f.message());
         if (programme.isEmpty()) {
-            return new Place(named, named == null ? null : namedDay, null);
+            return new Place(named, named.isEmpty() ? null : namedDay, null);
         }
         String pointer = f.location().pointer();
-        Integer week = named;
-        Integer day = null;
+        SortedSet<Integer> weeks = named;
         for (Week w : programme.get().weeks()) {
-            if (named != null && w.number() != named) {
+            if (!named.isEmpty() && w.number() != named.first()) {
                 continue;
             }
             for (Session s : w.sessions()) {
                 if (contains(s.location().pointer(), pointer)) {
-                    return new Place(w.number(), s.day(), s.label());
+                    return new Place(named.isEmpty() ? single(w.number()) : named, s.day(), s.label());
                 }
             }
-            if (week == null && contains(w.location().pointer(), pointer)) {
-                week = w.number();
+            if (weeks.isEmpty() && contains(w.location().pointer(), pointer)) {
+                weeks = single(w.number());
             }
         }
-        if (week != null && namedDay != null) {
-            day = namedDay;
-        }
-        return new Place(week, day, null);
+        return new Place(weeks, !weeks.isEmpty() && namedDay != null ? namedDay : null, null);
     }
 
-    private static boolean contains(String node, String pointer) {
+    /** True when the finding at {@code pointer} lies inside the node at {@code node}. */
+    static boolean contains(String node, String pointer) {
         return !node.isEmpty() && (pointer.equals(node) || pointer.startsWith(node + "/"));
+    }
+
+    private static SortedSet<Integer> single(int week) {
+        SortedSet<Integer> one = new TreeSet<>();
+        one.add(week);
+        return one;
     }
 
     private static Integer number(Pattern pattern, String text) {
@@ -89,19 +103,20 @@ final class FindingGroups {
     }
 
     private static String title(Optional<Programme> programme, Place place) {
-        if (place.week == null) {
+        if (place.weeks.isEmpty()) {
             return "Whole programme";
         }
-        String week = "Week " + place.week;
+        String weeks = FindingWeeks.title(place.weeks);
         if (place.day == null) {
-            return week;
+            return weeks;
         }
         if (place.session != null) {
-            return week + " · " + place.session;
+            return weeks + " · " + place.session;
         }
-        String session = programme.flatMap(p -> p.weeks().stream().filter(w -> w.number() == place.week)
+        int first = place.weeks.first();
+        String session = programme.flatMap(p -> p.weeks().stream().filter(w -> w.number() == first)
                 .flatMap(w -> w.sessions().stream()).filter(s -> s.day() == place.day).findFirst())
                 .map(Session::label).orElse("day " + place.day);
-        return week + " · " + session;
+        return weeks + " · " + session;
     }
 }

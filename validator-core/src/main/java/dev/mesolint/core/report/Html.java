@@ -39,6 +39,13 @@ final class Html {
                 : String.format(Locale.ROOT, "%.1f", rounded);
     }
 
+    /** A weight as loaded: up to two decimals, none when whole ({@code 107.5}, {@code 1.25}, {@code 100}). */
+    static String weight(double value) {
+        double rounded = Math.round(value * 100) / 100.0;
+        return rounded == Math.rint(rounded) ? Long.toString((long) rounded)
+                : java.math.BigDecimal.valueOf(rounded).stripTrailingZeros().toPlainString();
+    }
+
     /** A coordinate for SVG attributes: two decimals at most, always a dot. */
     static String px(double value) {
         double rounded = Math.round(value * 100) / 100.0;

@@ -97,20 +97,103 @@ final class HtmlStyles {
             footer { max-width: 1120px; margin: 0 auto 30px; padding: 14px 20px; border-top: 3px double var(--rule);
               color: var(--ink); }
             footer .caution { font-size: 14px; }
+            .caution { border: 2px solid var(--ink); border-radius: 4px; padding: 8px 12px; background: #fff; }
+            .how-to-read { background: #fff; border: 1px solid var(--rule); border-radius: 6px; margin: 18px 0;
+              padding: 4px 20px 10px; }
+            .how-to-read h2 { font-size: 17px; }
+            .how-to-read dl { display: grid; grid-template-columns: repeat(auto-fill, minmax(300px, 1fr));
+              gap: 6px 22px; margin: 6px 0; }
+            .how-to-read dt { font-weight: bold; }
+            .how-to-read dd { margin: 0; font-size: 14px; }
+            nav { max-width: 1120px; margin: 0 auto; padding: 0 20px; }
+            table { border-collapse: collapse; }
+            table.index { width: 100%; margin: 16px 0 0; background: #fff; border: 1px solid var(--rule); }
+            table.index caption { text-align: left; font-weight: bold; padding: 4px 0; }
+            table.index th, table.index td { text-align: left; padding: 5px 10px; border-bottom: 1px solid var(--rule); }
+            table.index td:nth-child(n+4) { text-align: right; }
+            button.sort { font: inherit; font-weight: bold; background: none; border: 0; padding: 0; cursor: pointer;
+              color: var(--ink); text-decoration: underline dotted; }
+            th[aria-sort="ascending"] button.sort::after { content: " ▴"; }
+            th[aria-sort="descending"] button.sort::after { content: " ▾"; }
+            .outcome { display: inline-block; font-weight: bold; font-size: 13px; padding: 0 7px; border-radius: 3px;
+              border: 2px solid; white-space: nowrap; }
+            .outcome.passes { color: #00573f; border-color: var(--kept); }
+            .outcome.fails { color: #8a2f00; border-color: var(--err); border-style: dashed; }
+            details > summary { cursor: pointer; list-style-position: outside; margin-left: 18px; }
+            details > summary h2 { display: inline; }
+            section.programme > details > summary { padding: 12px 0 6px; }
+            .note, .week-note { color: var(--muted); font-size: 14px; margin: 4px 0 8px; }
+            .tag { font-size: 12px; font-weight: bold; text-transform: uppercase; border: 1px solid var(--ink);
+              border-radius: 3px; padding: 0 5px; vertical-align: middle; }
+            table.plan { width: 100%; margin: 4px 0 14px; font-size: 14px; table-layout: fixed; }
+            table.plan caption { text-align: left; font-weight: bold; padding: 4px 0; }
+            table.plan th, table.plan td { text-align: left; vertical-align: top; padding: 4px 8px;
+              border-bottom: 1px solid var(--rule); }
+            table.plan thead th { font-size: 12px; text-transform: uppercase; color: var(--muted);
+              border-bottom: 2px solid var(--ink); }
+            table.plan tbody th { font-weight: normal; }
+            table.plan .load strong { white-space: nowrap; }
+            table.plan .detail { display: block; font-size: 12px; color: var(--muted); }
+            tr.superset th { background: var(--wash); font-weight: bold; font-size: 13px; }
+            tr.in-superset th { padding-left: 20px; }
+            .item { font-weight: bold; font-family: "DejaVu Sans Mono", monospace; }
+            td.changed { background: #fff6dd; }
+            .delta { font-weight: bold; color: #6b4a00; }
+            .down { font-weight: bold; }
+            .none { color: var(--muted); }
+            a.mark { display: inline-block; font: 12px "DejaVu Sans Mono", monospace; white-space: nowrap;
+              margin: 0 4px 2px 0; }
+            a.line { font: 12px "DejaVu Sans Mono", monospace; }
+            table.maxes th, table.maxes td { padding: 3px 14px 3px 0; text-align: left; border-bottom: 1px solid var(--rule); }
+            table.maxes caption { text-align: left; font-weight: bold; padding: 4px 0; }
+            ul.constraints { padding-left: 20px; }
+            ul.constraints p { margin: 2px 0; }
+            .term { font-weight: bold; }
+            .filter { display: flex; flex-wrap: wrap; gap: 6px 16px; align-items: center; margin: 6px 0 10px;
+              font-size: 14px; }
+            .filter .count { color: var(--muted); }
+            .sr { position: absolute; width: 1px; height: 1px; overflow: hidden; clip: rect(0 0 0 0);
+              white-space: nowrap; }
+            .sheet-head { margin: 0 0 10px; }
+            .sheet-head h1 { font-size: 22px; margin: 10px 0 2px; }
+            @page { margin: 12mm 11mm; }
             @media print {
-              body { background: #fff; font-size: 11pt; }
+              body { background: #fff; font-size: 10.5pt; }
               .masthead { background: #fff; color: #000; border-bottom: 2px solid #000; padding: 0 0 8px; }
               .masthead a, .masthead .path { color: #000; }
               .masthead .verdict { border-color: #000; }
-              nav { display: none; }
-              main, footer { max-width: none; padding: 0; }
-              section.programme { border: 0; padding: 0; break-before: page; }
+              nav, main, footer { max-width: none; padding: 0; }
+              .filter, button.sort::after { display: none; }
+              section.programme { border: 0; padding: 0; margin: 0; break-before: page; }
               section.programme:first-of-type { break-before: auto; }
-              figure, li.finding { break-inside: avoid; }
-              figure { border: 0; overflow: visible; }
-              svg, .badge, li.finding { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+              details > summary { list-style: none; margin-left: 0; }
+              details > summary::-webkit-details-marker { display: none; }
+              h1, h2, h3, h4, caption, figcaption, summary { break-after: avoid; }
+              figure, li.finding, table.plan, table.maxes, .how-to-read div, .caution, tr { break-inside: avoid; }
+              table.index { font-size: 9.5pt; }
+              table.index .path { font-size: 8pt; overflow-wrap: anywhere; }
+              .keep { break-inside: avoid; }
+              figure { border: 0; overflow: visible; padding: 0; margin: 10px 0; }
+              svg.chart { max-height: 150mm; width: auto; max-width: 100%; }
+              .how-to-read dl { grid-template-columns: 1fr 1fr; }
+              table.plan { font-size: 9.5pt; }
+              table.plan th, table.plan td { padding: 2px 5px; }
+              body.sheet { line-height: 1.2; }
+              body.sheet table.plan { font-size: 8.5pt; margin-bottom: 5px; }
+              body.sheet table.plan th, body.sheet table.plan td { padding: 1px 4px; }
+              body.sheet table.plan caption { padding: 2px 0 1px; }
+              body.sheet table.plan .detail { display: inline; font-size: 7.5pt; }
+              body.sheet .sheet-head h1 { font-size: 14pt; margin: 0; }
+              body.sheet .caution { padding: 3px 6px; font-size: 8pt; margin: 4px 0; }
+              body.sheet .note { font-size: 8pt; margin: 2px 0 3px; }
+              body.sheet h4 { margin: 4px 0 1px; font-size: 11pt; }
+              svg, .badge, li.finding, td.changed, .outcome { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
               a { color: #000; text-decoration: none; }
-              .finding a.where::after { content: " (" attr(href) ")"; font-size: 9pt; }
+              .finding a.where::after { content: " (" attr(href) ")"; font-size: 8pt; }
+              body.sheet section.week { break-before: page; }
+              body.sheet section.week.first { break-before: auto; }
+              body.sheet section.programme { break-before: page; }
+              body.sheet section.programme.first { break-before: auto; }
             }
             """;
 }

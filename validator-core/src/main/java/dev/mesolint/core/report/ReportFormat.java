@@ -17,11 +17,13 @@ public enum ReportFormat {
     /** JUnit XML for CI test views: one suite per file, one case per rule. */
     JUNIT,
     /** One self-contained HTML page with charts, for coaches. */
-    HTML;
+    HTML,
+    /** The athlete's sheet: the prescription with worked-out loads only, a week per printed page. */
+    HTML_SHEET;
 
-    /** The name used on the command line and in build configuration: {@code sarif}, {@code html}. */
+    /** The name used on the command line and in build configuration: {@code sarif}, {@code html-sheet}. */
     public String id() {
-        return name().toLowerCase(Locale.ROOT);
+        return name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     /** A new writer for this format; {@code destination} is where the report will be written (for relative links). */
@@ -32,6 +34,7 @@ public enum ReportFormat {
             case SARIF -> new SarifReport();
             case JUNIT -> new JunitReport();
             case HTML -> new HtmlReport(destination == null ? null : destination.toAbsolutePath().getParent());
+            case HTML_SHEET -> new HtmlSheet();
         };
     }
 
@@ -40,7 +43,7 @@ public enum ReportFormat {
                 .findFirst();
     }
 
-    /** The accepted names, for usage messages: {@code console, json, sarif, junit, html}. */
+    /** The accepted names, for usage messages: {@code console, json, sarif, junit, html, html-sheet}. */
     public static String names() {
         return Arrays.stream(values()).map(ReportFormat::id).collect(Collectors.joining(", "));
     }

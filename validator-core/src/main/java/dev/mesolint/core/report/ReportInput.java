@@ -19,9 +19,16 @@ import java.util.Objects;
  * @param root    the folder that findings' paths are relative to
  * @param elapsed how long the run took; {@link Duration#ZERO} when not measured
  * @param options how the front end wants the reports worded (help links, baseline, JUnit failures, git)
+ * @param html    how the coach's report and the athlete's sheet are written (plate increment, reasons, catalogue,
+ *                extra sections)
  */
 public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
-        ReportFigures figures, Duration elapsed, ReportOptions options) {
+        ReportFigures figures, Duration elapsed, ReportOptions options, HtmlOptions html) {
+
+    public ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
+            ReportFigures figures, Duration elapsed, ReportOptions options) {
+        this(run, rules, configuration, root, figures, elapsed, options, HtmlOptions.DEFAULTS);
+    }
 
     public ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfiguration configuration, Path root,
             ReportFigures figures, Duration elapsed) {
@@ -36,6 +43,7 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
         Objects.requireNonNull(figures, "figures");
         Objects.requireNonNull(elapsed, "elapsed");
         Objects.requireNonNull(options, "options");
+        Objects.requireNonNull(html, "html");
     }
 
     /** Default configuration, no figures, duration not measured. */
@@ -44,19 +52,23 @@ public record ReportInput(RunReport run, List<RuleDefinition> rules, RuleConfigu
     }
 
     public ReportInput withConfiguration(RuleConfiguration newConfiguration) {
-        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed, options);
+        return new ReportInput(run, rules, newConfiguration, root, figures, elapsed, options, html);
     }
 
     public ReportInput withFigures(ReportFigures newFigures) {
-        return new ReportInput(run, rules, configuration, root, newFigures, elapsed, options);
+        return new ReportInput(run, rules, configuration, root, newFigures, elapsed, options, html);
     }
 
     public ReportInput withElapsed(Duration newElapsed) {
-        return new ReportInput(run, rules, configuration, root, figures, newElapsed, options);
+        return new ReportInput(run, rules, configuration, root, figures, newElapsed, options, html);
     }
 
     public ReportInput withOptions(ReportOptions newOptions) {
-        return new ReportInput(run, rules, configuration, root, figures, elapsed, newOptions);
+        return new ReportInput(run, rules, configuration, root, figures, elapsed, newOptions, html);
+    }
+
+    public ReportInput withHtml(HtmlOptions newHtml) {
+        return new ReportInput(run, rules, configuration, root, figures, elapsed, options, newHtml);
     }
 
     /** The rules that run on a file checked under {@code profile}: the registered rules that are not off there. */

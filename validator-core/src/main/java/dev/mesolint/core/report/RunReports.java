@@ -32,6 +32,7 @@ public final class RunReports {
             case SARIF -> "mesolint.sarif";
             case JUNIT -> "TEST-mesolint.xml";
             case HTML -> "mesolint.html";
+            case HTML_SHEET -> "mesolint-sheet.html";
         };
         return new ReportTarget(format, folder.resolve(name));
     }
@@ -41,7 +42,7 @@ public final class RunReports {
      * every programme loaded, so results reused from a cache, which keeps findings only, cannot feed them.
      */
     public static boolean needsFigures(ReportFormat format) {
-        return format == ReportFormat.HTML || format == ReportFormat.JSON;
+        return format == ReportFormat.HTML || format == ReportFormat.HTML_SHEET || format == ReportFormat.JSON;
     }
 
     /** Writes {@code input} to every target. */

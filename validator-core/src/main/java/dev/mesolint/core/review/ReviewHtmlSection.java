@@ -1,15 +1,19 @@
 package dev.mesolint.core.review;
 
+import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.finding.Finding;
-import dev.mesolint.core.report.HtmlSection;
+import dev.mesolint.core.report.ProgrammeSection;
+import dev.mesolint.core.report.ReportInput;
 import java.util.List;
+import java.util.Optional;
 import org.apache.commons.text.StringEscapeUtils;
 
 /**
- * The HTML report's "changes since REV" section: the summary, then per changed programme its changed figures as a
- * table, the limits crossed and the findings new and resolved. Every text is escaped.
+ * The HTML report's "changes since REV" section of each programme the change touched: what happened to the file,
+ * the changed figures as a table, the limits crossed and the findings new and resolved. Every text is escaped;
+ * a programme the change left alone gets no section.
  */
-public final class ReviewHtmlSection implements HtmlSection {
+public final class ReviewHtmlSection implements ProgrammeSection {
     private static final String ARROW = "→";
     private final ReviewInput input;
 
@@ -18,22 +22,23 @@ public final class ReviewHtmlSection implements HtmlSection {
     }
 
     @Override
-    public String html() {
+    public void render(ReportInput report, FileReport file, String id, StringBuilder out) {
         Review review = input.review();
-        StringBuilder out = new StringBuilder(4096);
-        out.append("<section class=\"programme changes\" id=\"changes\" aria-labelledby=\"changes-title\">\n")
-                .append("<h2 id=\"changes-title\">Changes since ").append(esc(review.base().label())).append("</h2>\n")
-                .append("<p>").append(esc(ReviewText.summary(review))).append(". Compared with ")
-                .append(esc(review.headLabel())).append(".</p>\n");
-        for (ProgrammeChange p : review.changed()) {
-            out.append("<h3><span class=\"path\">").append(esc(p.path())).append("</span> ")
-                    .append(esc(ReviewText.status(p, ARROW))).append("</h3>\n");
-            table(out, p);
-            list(out, "Limits crossed", p.limits().stream().map(l -> ReviewText.limit(l, ARROW)).toList());
-            list(out, "New findings", p.findings().introduced().stream().map(this::finding).toList());
-            list(out, "Resolved findings", p.findings().resolved().stream().map(this::finding).toList());
+        Optional<ProgrammeChange> change = review.changed().stream()
+                .filter(p -> p.after().equals(Optional.of(file.displayPath()))).findFirst();
+        if (change.isEmpty()) {
+            return;
         }
-        return out.append("</section>\n").toString();
+        ProgrammeChange p = change.get();
+        out.append("<section class=\"changes\" id=\"").append(id).append("-changes\" aria-labelledby=\"")
+                .append(id).append("-changes-title\">\n<h3 id=\"").append(id).append("-changes-title\">Changes since ")
+                .append(esc(review.base().label())).append("</h3>\n<p>").append(esc(ReviewText.status(p, ARROW)))
+                .append(".</p>\n");
+        table(out, p);
+        list(out, "Limits crossed", p.limits().stream().map(l -> ReviewText.limit(l, ARROW)).toList());
+        list(out, "New findings", p.findings().introduced().stream().map(this::finding).toList());
+        list(out, "Resolved findings", p.findings().resolved().stream().map(this::finding).toList());
+        out.append("</section>\n");
     }
 
     private String finding(Finding f) {

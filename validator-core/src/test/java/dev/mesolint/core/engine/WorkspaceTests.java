@@ -139,6 +139,18 @@ class WorkspaceTests {
     }
 
     @Test
+    void theConfigurationSetsThePlateIncrementTheReportRoundsTo() throws ConfigProblem {
+        TempFiles.write(root, ".mesolint.yaml", "plate-increment: 1.25kg\n");
+        assertEquals(Optional.of(new dev.mesolint.core.value.Load.Absolute(1.25, dev.mesolint.core.value.LoadUnit.KG)),
+                open(RunOptions.at(root)).config().plateIncrement());
+        TempFiles.write(root, ".mesolint.yaml", "fail-on: info\n");
+        assertEquals(Optional.empty(), open(RunOptions.at(root)).config().plateIncrement());
+        ConfigProblem share = problem("plate-increment: 2.5%\n");
+        assertTrue(share.describe().contains("plate-increment '2.5%' is not a weight"), share.describe());
+        assertTrue(share.describe().contains("plate-increment: 2.5kg"), share.describe());
+    }
+
+    @Test
     void anExplicitConfigFileIsReadInsteadOfTheRootOne() throws ConfigProblem {
         TempFiles.write(root, ".mesolint.yaml", "fail-on: info\n");
         Path other = TempFiles.write(root, "ci/mesolint-ci.yaml", "fail-on: warning\n");
@@ -159,7 +171,8 @@ class WorkspaceTests {
     @Test
     void badConfigurationIsALocatedErrorWithAFix() {
         assertEquals(".mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: did you "
-                + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root)",
+                + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
+                + "plate-increment)",
                 problem("profile: strength\nfail-level: warning\n").describe());
         assertEquals(".mesolint.yaml:1:10: fail-on 'sometimes' is not a level (fix: one of: error, warning, info)",
                 problem("fail-on: sometimes\n").describe());

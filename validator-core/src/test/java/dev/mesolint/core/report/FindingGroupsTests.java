@@ -44,4 +44,28 @@ class FindingGroupsTests {
         assertEquals(List.of("Whole programme", "Week 2 · day 9"), FindingGroups.of(file, file.findings()).stream()
                 .map(FindingGroups.Group::title).toList());
     }
+
+    @Test
+    void aFindingAboutRepeatedWeeksGoesUnderThoseWeeksNotTheWeekTheyCopy() {
+        // Repeated weeks copy week 1's lines, so the pointer is in week 1; the message names weeks 2-4.
+        FileReport loaded = ReportFixtures.check("sample-programs/programmes/minimal-30-minutes.yaml").files().get(0);
+        var repeated = ReportFixtures.finding("constraint-load", Severity.ERROR, "a.yaml", 40, 13,
+                "/weeks/0/sessions/0/work/0/load", "barbell-bench-press, weeks 2-4 day 1 (x), sets 1-3: too heavy");
+        var first = ReportFixtures.finding("constraint-load", Severity.ERROR, "a.yaml", 40, 13,
+                "/weeks/0/sessions/0/work/0/load", "barbell-bench-press, week 1 day 1 (x), sets 1-3: too heavy");
+        FileReport file = new FileReport("a.yaml", loaded.programme(), loaded.profile(), List.of(repeated, first));
+        List<FindingGroups.Group> groups = FindingGroups.of(file, file.findings());
+        String session = loaded.programme().get().weeks().get(0).sessions().get(0).label();
+        assertEquals(List.of("Week 1 · " + session, "Weeks 2-4 · " + session),
+                groups.stream().map(FindingGroups.Group::title).toList());
+        assertEquals(java.util.Set.of(2, 3, 4), groups.get(1).weeks());
+    }
+
+    @Test
+    void readsTheWeeksAMessageNamesFirst() {
+        assertEquals(java.util.Set.of(3), FindingWeeks.of("chest, week 3: 16 hard sets, 2 x the mean of weeks 1-2"));
+        assertEquals(java.util.Set.of(1, 2, 4, 5, 6), FindingWeeks.of("squat, weeks 1-2, 4-6 day 1: x"));
+        assertEquals(java.util.Set.of(), FindingWeeks.of("needs 'goal'"));
+        assertEquals("Weeks 1-2, 4-6", FindingWeeks.title(new java.util.TreeSet<>(List.of(1, 2, 4, 5, 6))));
+    }
 }

@@ -71,7 +71,12 @@ class HtmlReportTests {
     void isSelfContainedWithCautionAndPrintStyles() {
         String html = ReportFixtures.render(ReportFormat.HTML, sampleWithFigures());
         assertTrue(html.startsWith("<!DOCTYPE html>"));
-        assertFalse(html.contains("<script"));
+        // One inline script, allowed by its hash and by nothing else: no source, no other inline script.
+        assertEquals(1, count(html, "<script>"));
+        assertFalse(html.contains("<script src"));
+        assertTrue(html.contains("script-src " + HtmlScript.CSP_SOURCE));
+        assertFalse(html.contains("unsafe-eval"));
+        assertFalse(Pattern.compile("script-src[^;\"]*unsafe-inline").matcher(html).find());
         assertFalse(Pattern.compile("\\s(src|srcset)=").matcher(html).find(), "nothing is loaded");
         assertFalse(html.contains("rel=\"stylesheet\""));
         assertFalse(html.contains("@import"));

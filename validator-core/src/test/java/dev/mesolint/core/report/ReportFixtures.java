@@ -37,6 +37,16 @@ final class ReportFixtures {
         return new Checker(CheckRequest.of(inputs, ROOT), RULES).run();
     }
 
+    /** The built-in catalogue, as a run reads it. */
+    static dev.mesolint.core.catalogue.Catalogue catalogue() {
+        return new Checker(CheckRequest.of(List.of(), ROOT), RULES).catalogue();
+    }
+
+    /** The input of a real run with the catalogue the coach's report names exercises and finds caps with. */
+    static ReportInput withCatalogue(RunReport run) {
+        return input(run).withHtml(HtmlOptions.DEFAULTS.withCatalogue(catalogue()));
+    }
+
     static ReportInput input(RunReport run) {
         return ReportInput.of(run, RULES, ROOT);
     }

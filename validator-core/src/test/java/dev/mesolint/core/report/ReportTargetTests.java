@@ -39,7 +39,8 @@ class ReportTargetTests {
             Path path = dir.resolve("deep/" + format.id() + "/report." + format.id());
             ReportFiles.write(input, new ReportTarget(format, path));
             String text = Files.readString(path, StandardCharsets.UTF_8);
-            String caution = format == ReportFormat.HTML ? Html.esc(Mesolint.CAUTION) : Mesolint.CAUTION;
+            String caution = format == ReportFormat.HTML || format == ReportFormat.HTML_SHEET ? Html.esc(Mesolint.CAUTION)
+                    : Mesolint.CAUTION;
             assertTrue(text.contains(caution), format + " carries the caution");
         }
     }
