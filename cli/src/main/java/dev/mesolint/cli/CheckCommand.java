@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
@@ -134,7 +135,10 @@ final class CheckCommand implements Callable<Integer> {
             request = workspace.request(piped.isPresent() ? List.of() : paths);
             Checker built = new Checker(request, installed.rules());
             checker = built;
-            report = piped.map(d -> built.run(d.path(), d.content())).orElseGet(built::run);
+            report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
+                    .orElseGet(built::run));
+            built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
+                    + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
             if (!noBaseline) {
                 report = workspace.applyBaseline(report);
             }

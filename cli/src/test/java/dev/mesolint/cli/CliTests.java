@@ -108,6 +108,41 @@ class CliTests {
     }
 
     @Test
+    void aBaselineLeavesErrorsOutUnlessAskedAndTheCheckSaysWhatItHolds() throws IOException {
+        // The curls renamed to an id the catalogue lacks: an unknown-exercise error beside the squat's short rest.
+        write("programmes/block.yaml", PROGRAMME.replace("dumbbell-curl", "harbour-rope-curl"));
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\n");
+        Run without = run("baseline", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, without.exit(), without.err());
+        assertTrue(without.out().contains("Wrote 1 finding from 1 file"), without.out());
+        assertTrue(without.out().contains("Left out 1 error: they keep failing 'mesolint check'"), without.out());
+        Run failing = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(1, failing.exit(), failing.out());
+        assertTrue(failing.out().contains("1 error, 0 warnings, 0 info, 0 waived, 1 baselined (1 warning)"),
+                failing.out());
+
+        Run with = run("baseline", "--include-errors", "--root", rootArg(), root.resolve("programmes").toString());
+        assertTrue(with.out().startsWith("Wrote 2 findings from 1 file"), with.out());
+        assertFalse(with.out().contains("Left out"), with.out());
+        Run passing = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, passing.exit(), passing.out());
+        assertTrue(passing.out().contains("0 errors, 0 warnings, 0 info, 0 waived, 2 baselined (1 error, 1 warning)"),
+                passing.out());
+
+        // A renamed session keeps the baseline green; fixing everything leaves '0 baselined' and stale entries.
+        write("programmes/block.yaml", PROGRAMME.replace("  - day: 1\n", "  - day: 1\n        name: Pull (renamed)\n")
+                .replace("dumbbell-curl", "harbour-rope-curl"));
+        assertEquals(0, run("check", "--root", rootArg(), root.resolve("programmes").toString()).exit());
+        write("programmes/block.yaml", PROGRAMME.replace("rest: 90s", "rest: 2min").replace("rest: 30s",
+                "rest: 1min"));
+        Run fixed = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, fixed.exit(), fixed.out());
+        assertTrue(fixed.out().contains("info unused-baseline-entry: baseline entry unknown-exercise in harbour-cli"),
+                fixed.out());
+        assertTrue(fixed.out().contains("0 waived, 0 baselined"), fixed.out());
+    }
+
+    @Test
     void aBaselineHoldsTodaysFindingsSoOnlyNewOnesFail() throws IOException {
         Path block = write("programmes/block.yaml", PROGRAMME);
         write(".mesolint.yaml", "fail-on: info\nbaseline: .mesolint-baseline.json\n");
@@ -122,7 +157,8 @@ class CliTests {
         Run clean = run("check", "--root", rootArg(), root.resolve("programmes").toString());
         assertEquals(0, clean.exit(), clean.out());
         assertTrue(clean.out().contains("baselined warning short-rest-compound"), clean.out());
-        assertTrue(clean.out().contains("0 errors, 0 warnings, 0 info, 0 waived, 2 baselined"), clean.out());
+        assertTrue(clean.out().contains("0 errors, 0 warnings, 0 info, 0 waived, 2 baselined (1 warning, 1 info)"),
+                clean.out());
 
         Files.writeString(block, "# moved down by a comment\n" + PROGRAMME.replace("rest: 60s",
                 "rest: 60s\n            tempo: 2-0-4-0"));

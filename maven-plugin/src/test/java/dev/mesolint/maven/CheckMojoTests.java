@@ -19,7 +19,8 @@ class CheckMojoTests {
 
     private MojoFixture repository() throws IOException {
         return new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME)
-                .programme("rehab/misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench"));
+                .programme("rehab/misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench")
+                        .replace("id: harbour-test", "id: harbour-rehab"));
     }
 
     @Test

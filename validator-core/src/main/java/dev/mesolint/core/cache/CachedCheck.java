@@ -2,9 +2,11 @@ package dev.mesolint.core.cache;
 
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -72,7 +74,9 @@ public final class CachedCheck {
                 }
             }
         }
-        RunReport report = new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
+        // Ids are compared across all files, cached or not, after the cache has stored each file's own findings.
+        List<FileReport> marked = DuplicateProgrammeIds.mark(reports, Severity.ERROR);
+        RunReport report = new RunReport(marked, request.failOn(), missing.stream().map(Path::toString).toList());
         return new Outcome(report, reused, pending.size() - reused, unreadable);
     }
 

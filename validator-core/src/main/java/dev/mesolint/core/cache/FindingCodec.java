@@ -1,8 +1,14 @@
 package dev.mesolint.core.cache;
 
 import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.FileTiming;
+import dev.mesolint.core.engine.ProgrammeIdentity;
+import dev.mesolint.core.finding.Anchor;
+import dev.mesolint.core.finding.Edit;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.finding.Subject;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.source.Location;
 import java.util.ArrayList;
@@ -24,6 +30,11 @@ final class FindingCodec {
         ObjectNode node = JSON.objectNode();
         node.put("file", report.displayPath());
         node.put("profile", report.profile());
+        report.identity().ifPresent(i -> {
+            ObjectNode identity = node.putObject("identity");
+            identity.put("id", i.id());
+            location(identity, i.location());
+        });
         ArrayNode findings = node.putArray("findings");
         report.findings().forEach(f -> findings.add(finding(f)));
         return node;
@@ -35,7 +46,11 @@ final class FindingCodec {
         for (JsonNode f : required(node, "findings")) {
             findings.add(finding(f));
         }
-        return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings, Optional.empty());
+        JsonNode identity = node.get("identity");
+        Optional<ProgrammeIdentity> id = identity == null || identity.isNull() ? Optional.empty()
+                : Optional.of(new ProgrammeIdentity(text(identity, "id"), location(identity)));
+        return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings, Optional.empty(),
+                FileTiming.NONE, id);
     }
 
     private static ObjectNode finding(Finding f) {
@@ -46,6 +61,9 @@ final class FindingCodec {
         location(node, f.location());
         node.put("message", f.message());
         node.put("fix", f.fix());
+        node.put("programme", f.anchor().programme());
+        node.put("anchor", f.anchor().path());
+        facts(node, f.facts());
         f.waiver().ifPresent(w -> {
             ObjectNode waiver = node.putObject("waiver");
             waiver.put("rule", w.ruleId());
@@ -66,17 +84,67 @@ final class FindingCodec {
                     required(w, "wholeFile").asBoolean()));
         }
         return new Finding(text(node, "rule"), severity, text(node, "file"), location(node), text(node, "message"),
-                text(node, "fix"), waiver);
+                text(node, "fix"), waiver, false, facts(node), new Anchor(text(node, "programme"),
+                        text(node, "anchor")));
+    }
+
+    private static void facts(ObjectNode node, Facts facts) {
+        Subject s = facts.subject();
+        ObjectNode subject = node.putObject("subject");
+        subject.put("muscle", s.muscle());
+        subject.put("exercise", s.exercise());
+        subject.put("day", s.day());
+        ArrayNode weeks = subject.putArray("weeks");
+        s.weeks().forEach(weeks::add);
+        facts.measure().ifPresent(m -> {
+            ObjectNode measure = node.putObject("measure");
+            measure.put("value", m.value());
+            measure.put("limit", m.limit());
+            measure.put("unit", m.unit());
+        });
+        facts.edit().ifPresent(e -> {
+            ObjectNode edit = node.putObject("edit");
+            edit.put("pointer", e.pointer());
+            edit.put("key", e.key());
+            edit.put("text", e.text());
+            location(edit, e.location());
+        });
+    }
+
+    private static Facts facts(JsonNode node) {
+        JsonNode s = required(node, "subject");
+        List<Integer> weeks = new ArrayList<>();
+        required(s, "weeks").forEach(w -> weeks.add(w.asInt()));
+        Facts facts = Facts.about(new Subject(optionalText(s, "muscle"), optionalText(s, "exercise"),
+                s.hasNonNull("day") ? s.get("day").asInt() : null, weeks));
+        JsonNode m = node.get("measure");
+        if (m != null && !m.isNull()) {
+            facts = facts.measured(required(m, "value").asDouble(), required(m, "limit").asDouble(),
+                    text(m, "unit"));
+        }
+        JsonNode e = node.get("edit");
+        if (e != null && !e.isNull()) {
+            facts = facts.withEdit(new Edit(text(e, "pointer"), text(e, "key"), text(e, "text"), location(e)));
+        }
+        return facts;
+    }
+
+    private static String optionalText(JsonNode node, String field) {
+        JsonNode value = node.get(field);
+        return value == null || value.isNull() ? null : value.asString();
     }
 
     private static void location(ObjectNode node, Location location) {
         node.put("line", location.line());
         node.put("column", location.column());
+        node.put("endLine", location.endLine());
+        node.put("endColumn", location.endColumn());
         node.put("pointer", location.pointer());
     }
 
     private static Location location(JsonNode node) {
-        return new Location(required(node, "line").asInt(), required(node, "column").asInt(), text(node, "pointer"));
+        return new Location(required(node, "line").asInt(), required(node, "column").asInt(),
+                required(node, "endLine").asInt(), required(node, "endColumn").asInt(), text(node, "pointer"));
     }
 
     private static String text(JsonNode node, String field) {

@@ -29,7 +29,7 @@ import tools.jackson.databind.node.ObjectNode;
  * keeps only the files of the last run, so deleted programmes do not linger.
  */
 public final class ResultCache {
-    static final int FORMAT = 1;
+    static final int FORMAT = 2;
     private static final ObjectMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
     private final Path file;

@@ -74,13 +74,13 @@ public final class ConfigDocument {
     /** Where the value at {@code pointer} was written. */
     public Location valueAt(String pointer) {
         Location l = document.valueAt(pointer);
-        return new Location(l.line(), l.column(), pointer);
+        return l.withPointer(pointer);
     }
 
     /** Where the key naming {@code pointer} was written. */
     public Location keyAt(String pointer) {
         Location l = document.keyAt(pointer);
-        return new Location(l.line(), l.column(), pointer);
+        return l.withPointer(pointer);
     }
 
     public ConfigProblem problemAt(String pointer, String message, String hint) {

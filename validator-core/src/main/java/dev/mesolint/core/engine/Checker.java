@@ -148,8 +148,9 @@ public final class Checker {
                 request.configuration().modelParameters(profile));
         FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
         Map<String, Duration> ruleTimes = new RuleRunner(rules, request.configuration()).run(scope);
+        ProgrammeIdentity identity = new ProgrammeIdentity(programme.info().id(), document.valueAt("/programme/id"));
         return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics),
-                new FileTiming(Duration.ZERO, ruleTimes));
+                new FileTiming(Duration.ZERO, ruleTimes), Optional.of(identity));
     }
 
     private FileReport violationReport(String shown, Programme programme, String ruleId, List<Violation> violations) {

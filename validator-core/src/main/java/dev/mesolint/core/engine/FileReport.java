@@ -16,9 +16,11 @@ import java.util.Optional;
  * @param profile     the rule profile the file was checked under
  * @param metrics     the training-model figures, present when the programme loaded
  * @param timing      how long the check took, in all and per rule ({@link FileTiming#NONE} when reused or unknown)
+ * @param identity    the programme's id and where it is written, present when the programme loaded (also when the
+ *                    findings come from a cache that does not keep the programme)
  */
 public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
-        Optional<ProgrammeMetrics> metrics, FileTiming timing) {
+        Optional<ProgrammeMetrics> metrics, FileTiming timing, Optional<ProgrammeIdentity> identity) {
 
     private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
             .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)
@@ -27,6 +29,14 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
     public FileReport {
         findings = findings.stream().sorted(ORDER).toList();
         java.util.Objects.requireNonNull(timing, "timing");
+        java.util.Objects.requireNonNull(identity, "identity");
+    }
+
+    /** A report whose programme's id is taken from the programme, located at its header. */
+    public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
+            Optional<ProgrammeMetrics> metrics, FileTiming timing) {
+        this(displayPath, programme, profile, findings, metrics, timing,
+                programme.map(p -> new ProgrammeIdentity(p.info().id(), p.info().location())));
     }
 
     public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
@@ -36,7 +46,12 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
 
     /** This report with its timing. */
     public FileReport withTiming(FileTiming newTiming) {
-        return new FileReport(displayPath, programme, profile, findings, metrics, newTiming);
+        return new FileReport(displayPath, programme, profile, findings, metrics, newTiming, identity);
+    }
+
+    /** This report with other findings, all else the same. */
+    public FileReport withFindings(List<Finding> other) {
+        return new FileReport(displayPath, programme, profile, other, metrics, timing, identity);
     }
 
     /** A report without training-model figures (the file did not load, or figures were not asked for). */

@@ -22,7 +22,7 @@ final class BindContext {
 
     Location at(String pointer) {
         Location l = document.valueAt(pointer);
-        return new Location(l.line(), l.column(), pointer);
+        return l.withPointer(pointer);
     }
 
     List<Violation> violations() {

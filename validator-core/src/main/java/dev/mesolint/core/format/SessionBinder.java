@@ -8,6 +8,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Technique;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.Distance;
 import dev.mesolint.core.value.Durations;
 import dev.mesolint.core.value.Load;
@@ -18,12 +19,20 @@ import dev.mesolint.core.value.Tempo;
 import dev.mesolint.core.yaml.Pointers;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import tools.jackson.databind.JsonNode;
 
 /** Reads sessions, their work items and sets (schema-valid input). */
 final class SessionBinder {
+    /** The keys a set takes from its entry unless it writes them itself; their places go with the values. */
+    private static final List<String> SET_KEYS = List.of("reps", "hold", "distance", "test", "rir", "rpe", "load",
+            "rest", "tempo", "technique");
+    private static final List<String> EFFORT_KEYS = List.of("rir", "rpe", "load");
+    private static final List<String> AMOUNT_KEYS = List.of("reps", "hold", "distance");
+
     private final BindContext ctx;
 
     SessionBinder(BindContext ctx) {
@@ -110,6 +119,12 @@ final class SessionBinder {
     }
 
     private SetDefaults defaults(JsonNode node, String pointer) {
+        Map<String, Location> written = new HashMap<>();
+        for (String key : SET_KEYS) {
+            if (node.has(key)) {
+                written.put(key, ctx.at(Pointers.child(pointer, key)));
+            }
+        }
         Optional<RepTarget> reps = ctx.value(node, pointer, "reps", RepTarget::parse);
         Optional<Duration> hold = ctx.value(node, pointer, "hold", Durations::parseHold);
         Optional<Distance> distance = ctx.value(node, pointer, "distance", Distance::parse);
@@ -132,34 +147,50 @@ final class SessionBinder {
                 ctx.value(node, pointer, "load", Load::parse), ctx.value(node, pointer, "rest", Durations::parse),
                 ctx.value(node, pointer, "tempo", Tempo::parse),
                 Optional.ofNullable(BindContext.text(node, "technique"))
-                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)), test, amounts > 0);
+                        .map(t -> CatalogueEntryBinder.named(Technique.class, t)), test, amounts > 0,
+                written);
     }
 
     /** Values written on an exercise entry that its sets inherit unless a set overrides them. */
     private record SetDefaults(Optional<RepTarget> reps, Optional<Duration> hold, Optional<Distance> distance,
             Optional<RirRange> rir, Optional<Rpe> rpe, Optional<Load> load, Optional<Duration> rest,
-            Optional<Tempo> tempo, Optional<Technique> technique, boolean test, boolean amountWritten) {
+            Optional<Tempo> tempo, Optional<Technique> technique, boolean test, boolean amountWritten,
+            Map<String, Location> written) {
 
         SetDefaults override(SetDefaults set) {
             // An effort stated on the set replaces every effort form of the entry, so that the two never mix;
             // so does the amount of work: reps, a hold or a distance.
             boolean setStatesEffort = set.rir.isPresent() || set.rpe.isPresent() || set.load.isPresent();
             boolean setStatesAmount = set.reps.isPresent() || set.hold.isPresent() || set.distance.isPresent();
+            Map<String, Location> places = new HashMap<>(written);
+            if (setStatesEffort) {
+                EFFORT_KEYS.forEach(places::remove);
+            }
+            if (setStatesAmount) {
+                AMOUNT_KEYS.forEach(places::remove);
+            }
+            places.putAll(set.written);
             return new SetDefaults(setStatesAmount ? set.reps : reps, setStatesAmount ? set.hold : hold,
                     setStatesAmount ? set.distance : distance,
                     setStatesEffort ? set.rir : rir, setStatesEffort ? set.rpe : rpe,
                     setStatesEffort ? set.load : load, set.rest.or(() -> rest),
                     set.tempo.or(() -> tempo), set.technique.or(() -> technique), set.test || test,
-                    set.amountWritten || amountWritten);
+                    set.amountWritten || amountWritten, places);
         }
 
         /** The entry's values for a set before its last: no technique, and {@code 5+} read as 5. */
         SetDefaults beforeLastSet() {
             return new SetDefaults(reps.map(RepTarget::withoutAmrap), hold, distance, rir, rpe, load, rest, tempo,
-                    Optional.empty(), test, amountWritten);
+                    Optional.empty(), test, amountWritten, withoutTechnique());
         }
 
-        SetPrescription toSet(int number, dev.mesolint.core.source.Location location, List<Waiver> waivers,
+        private Map<String, Location> withoutTechnique() {
+            Map<String, Location> places = new HashMap<>(written);
+            places.remove("technique");
+            return places;
+        }
+
+        SetPrescription toSet(int number, Location location, List<Waiver> waivers,
                 BindContext ctx, String pointer) {
             RepTarget repTarget = reps.orElseGet(() -> {
                 // a bad value written for reps, hold or distance is reported once, where it is written
@@ -171,7 +202,7 @@ final class SessionBinder {
                 return RepTarget.exactly(1);
             });
             return new SetPrescription(number, repTarget, rir, rpe, load, rest, tempo, technique, hold, distance, test,
-                    location, waivers);
+                    location, waivers, written);
         }
     }
 }

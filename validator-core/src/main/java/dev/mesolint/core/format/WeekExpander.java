@@ -7,6 +7,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.source.Location;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;

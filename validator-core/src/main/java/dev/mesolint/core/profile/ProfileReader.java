@@ -3,12 +3,10 @@ package dev.mesolint.core.profile;
 import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleParameter;
-import dev.mesolint.core.rules.InternalErrorRule;
-import dev.mesolint.core.rules.SchemaRule;
-import dev.mesolint.core.rules.YamlSyntaxRule;
 import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.yaml.Pointers;
 import java.nio.file.Path;
@@ -29,7 +27,7 @@ public final class ProfileReader {
     static final String NAME_PATTERN = "[a-z][a-z0-9]*(-[a-z0-9]+)*";
 
     /** Rules that report files which could not be loaded: their severity is fixed, or a broken file could pass. */
-    static final Set<String> FIXED = Set.of(YamlSyntaxRule.ID, SchemaRule.ID, InternalErrorRule.ID);
+    static final Set<String> FIXED = FrameworkRules.FIXED_SEVERITY;
 
     private final Map<String, RuleDefinition> rules;
 

@@ -9,6 +9,7 @@ import dev.mesolint.core.value.Rpe;
 import dev.mesolint.core.value.Tempo;
 import java.time.Duration;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -22,14 +23,31 @@ import java.util.Optional;
  * @param test     a 1RM test ({@code test: 1rm}): a single to the lifter's current max, which then replaces the
  *                 stated 1RM of the exercise for the sessions after it
  * @param location the YAML node that wrote the set (for an expanded week, the line in the week it repeats)
+ * @param written  where each of the set's values was written, by key ({@code rest}, {@code rir}): on the set, or on
+ *                 the exercise entry it inherits from; a key without an entry was not written
  */
 public record SetPrescription(int number, RepTarget reps, Optional<RirRange> rir, Optional<Rpe> rpe,
         Optional<Load> load, Optional<Duration> rest, Optional<Tempo> tempo, Optional<Technique> technique,
         Optional<Duration> hold, Optional<Distance> distance, boolean test, Location location,
-        List<Waiver> waivers) implements Located {
+        List<Waiver> waivers, Map<String, Location> written) implements Located {
 
     public SetPrescription {
         waivers = List.copyOf(waivers);
+        written = Map.copyOf(written);
+    }
+
+    /** A set whose values' places are not known (built in code): findings about them point at the set. */
+    public SetPrescription(int number, RepTarget reps, Optional<RirRange> rir, Optional<Rpe> rpe,
+            Optional<Load> load, Optional<Duration> rest, Optional<Tempo> tempo, Optional<Technique> technique,
+            Optional<Duration> hold, Optional<Distance> distance, boolean test, Location location,
+            List<Waiver> waivers) {
+        this(number, reps, rir, rpe, load, rest, tempo, technique, hold, distance, test, location, waivers,
+                Map.of());
+    }
+
+    /** Where the value of {@code key} was written (inherited values at the entry), else where the set was. */
+    public Location placeOf(String key) {
+        return written.getOrDefault(key, location);
     }
 
     /** A set of reps: no hold, no carry, no test. */
@@ -44,7 +62,13 @@ public record SetPrescription(int number, RepTarget reps, Optional<RirRange> rir
     public SetPrescription with(int newNumber, RepTarget newReps, Optional<RirRange> newRir, Optional<Rpe> newRpe,
             Optional<Load> newLoad, Optional<Technique> newTechnique, List<Waiver> newWaivers) {
         return new SetPrescription(newNumber, newReps, newRir, newRpe, newLoad, rest, tempo, newTechnique, hold,
-                distance, test, location, newWaivers);
+                distance, test, location, newWaivers, newTechnique.isPresent() ? written : withoutTechnique(written));
+    }
+
+    private static Map<String, Location> withoutTechnique(Map<String, Location> places) {
+        Map<String, Location> copy = new java.util.HashMap<>(places);
+        copy.remove("technique");
+        return copy;
     }
 
     /**

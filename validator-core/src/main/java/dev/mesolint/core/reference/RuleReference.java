@@ -3,6 +3,7 @@ package dev.mesolint.core.reference;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.profile.BuiltInProfiles;
 import dev.mesolint.core.profile.ProfileReader;
 import dev.mesolint.core.profile.ProfileSet;
@@ -173,8 +174,11 @@ public final class RuleReference {
     private static void configuring(RuleMetadata m, StringBuilder out) {
         out.append("## Configuring and waiving\n\n");
         if (!ProfileReader.configurable(m.id())) {
-            out.append("This rule reports files that could not be loaded. Its severity is fixed and it cannot be ")
-                    .append("waived: fix the file.\n\n");
+            out.append(m.id().equals(FrameworkRules.DUPLICATE_PROGRAMME_ID)
+                    ? "This rule reports programmes that cannot be told apart. Its severity is fixed and it cannot "
+                            + "be waived: give each programme its own id.\n\n"
+                    : "This rule reports files that could not be loaded. Its severity is fixed and it cannot be "
+                            + "waived: fix the file.\n\n");
             return;
         }
         String params = m.parameters().stream().map(p -> ", " + p.name() + ": " + p.format(p.defaultValue()))

@@ -107,14 +107,37 @@ public final class ConsoleReport implements ReportWriter {
         return lines;
     }
 
-    /** The closing count line, e.g. {@code 4 files checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED ...}. */
+    /**
+     * The closing count line, e.g. {@code 4 files checked: 1 error, 0 warnings, 0 info, 0 waived -> FAILED ...}; with
+     * a baseline, what it still accepts by severity: {@code , 3 baselined (1 error, 2 warnings)}.
+     */
     public static String summary(RunReport run) {
         long files = run.files().size();
-        long baselined = run.baselinedCount();
-        return String.format("%d file%s checked: %d error%s, %d warning%s, %d info, %d waived%s%s", files,
-                files == 1 ? "" : "s", run.count(Severity.ERROR), run.count(Severity.ERROR) == 1 ? "" : "s",
-                run.count(Severity.WARNING), run.count(Severity.WARNING) == 1 ? "" : "s", run.count(Severity.INFO),
-                run.waivedCount(), baselined == 0 ? "" : ", " + baselined + " baselined",
+        return String.format("%d file%s checked: %s, %d waived%s%s", files, files == 1 ? "" : "s",
+                count(run.count(Severity.ERROR), Severity.ERROR) + ", "
+                        + count(run.count(Severity.WARNING), Severity.WARNING) + ", "
+                        + count(run.count(Severity.INFO), Severity.INFO), run.waivedCount(), baselined(run),
                 run.failed() ? " -> FAILED (fail level: " + run.failOn().label() + ")" : "");
+    }
+
+    /** {@code , 3 baselined (1 error, 2 warnings)}; {@code , 0 baselined} with a baseline that holds nothing here. */
+    private static String baselined(RunReport run) {
+        long baselined = run.baselinedCount();
+        if (baselined == 0) {
+            return run.baselineApplied() ? ", 0 baselined" : "";
+        }
+        List<String> parts = new ArrayList<>();
+        for (Severity s : List.of(Severity.ERROR, Severity.WARNING, Severity.INFO)) {
+            long n = run.baselinedCount(s);
+            if (n > 0) {
+                parts.add(count(n, s));
+            }
+        }
+        return ", " + baselined + " baselined (" + String.join(", ", parts) + ")";
+    }
+
+    /** {@code 1 error}, {@code 2 warnings}, {@code 3 info}. */
+    private static String count(long n, Severity severity) {
+        return n + " " + severity.label() + (n == 1 || severity == Severity.INFO ? "" : "s");
     }
 }

@@ -1,6 +1,7 @@
 package dev.mesolint.core.report;
 
 import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.model.LiftWeek;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
@@ -9,12 +10,14 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.EnumSet;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.Set;
 
 /**
- * Plain-text tables for a terminal: credited hard sets per muscle (rows) and week (columns), then each session with
- * its estimated minutes and hard sets. Thread-safe.
+ * Plain-text tables for a terminal: credited hard sets per muscle (rows) and week (columns), the top set's %1RM per
+ * lift and week, then each session with its estimated minutes and hard sets. Thread-safe.
  */
 public final class MetricsTableFormatter {
     private static final String NL = System.lineSeparator();
@@ -42,7 +45,32 @@ public final class MetricsTableFormatter {
         sb.append(m.programmeId()).append(" (").append(file.file()).append(')').append(NL).append(NL);
         hardSetGrid(sb, m.weeks());
         sb.append(NL);
+        topSetGrid(sb, m);
         sessions(sb, m.weeks());
+    }
+
+    /** Lifts with a known share of 1RM in some week: the top set's %1RM per week, "-" where unknown or not done. */
+    private static void topSetGrid(StringBuilder sb, ProgrammeMetrics m) {
+        Set<String> lifts = new LinkedHashSet<>();
+        m.weeks().forEach(w -> w.lifts().stream().filter(l -> l.topSetFraction().isPresent())
+                .forEach(l -> lifts.add(l.exerciseId())));
+        if (lifts.isEmpty()) {
+            return;
+        }
+        int width = lifts.stream().mapToInt(String::length).max().orElse(0) + 2;
+        sb.append("Top set, % of 1RM, per week").append(NL);
+        StringBuilder header = new StringBuilder(alignLeft("lift", width));
+        m.weeks().forEach(w -> header.append(alignRight("w" + w.number() + (w.deload() ? "*" : ""), WEEK_WIDTH)));
+        sb.append(header.toString().stripTrailing()).append(NL);
+        for (String lift : lifts) {
+            StringBuilder row = new StringBuilder(alignLeft(lift, width));
+            for (WeekMetrics w : m.weeks()) {
+                OptionalDouble top = w.lift(lift).map(LiftWeek::topSetFraction).orElse(OptionalDouble.empty());
+                row.append(alignRight(top.isPresent() ? Numbers.fixed(100 * top.getAsDouble(), 1) : "-", WEEK_WIDTH));
+            }
+            sb.append(row).append(NL);
+        }
+        sb.append(NL);
     }
 
     private static void hardSetGrid(StringBuilder sb, List<WeekMetrics> weeks) {

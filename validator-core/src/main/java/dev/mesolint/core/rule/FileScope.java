@@ -1,10 +1,12 @@
 package dev.mesolint.core.rule;
 
 import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.Waiver;
+import dev.mesolint.core.source.Location;
 import dev.mesolint.core.yaml.LocatedDocument;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -59,6 +61,11 @@ public final class FileScope {
 
     public String profileName() {
         return profileName;
+    }
+
+    /** The anchor of a finding at {@code location}: this programme's id and the node's logical path. */
+    public Anchor anchor(Location location) {
+        return Anchors.of(document, programme.info().id(), displayPath, location.pointer());
     }
 
     /** Records a finding, waived when a waiver at its place (or for the whole file) names its rule. */

@@ -2,14 +2,15 @@ package dev.mesolint.core.rule;
 
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Programme;
+import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.source.Location;
-import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.List;
 import java.util.Optional;
@@ -64,6 +65,11 @@ public final class RuleContext {
         report(subject.location(), subject.waivers(), message, fix);
     }
 
+    /** Reports a finding about {@code subject} with what it is about, measured and how to change it. */
+    public void report(Located subject, String message, String fix, Facts facts) {
+        report(subject.location(), subject.waivers(), settings.severity(), message, fix, facts);
+    }
+
     public void report(Location location, List<Waiver> waivers, String message, String fix) {
         report(location, waivers, settings.severity(), message, fix);
     }
@@ -79,33 +85,35 @@ public final class RuleContext {
      * {@link #severity()} to derive it, so that a profile's choice still counts.
      */
     public void report(Location location, List<Waiver> waivers, Severity severity, String message, String fix) {
+        report(location, waivers, severity, message, fix, Facts.NONE);
+    }
+
+    /**
+     * The one place findings are made: the framework adds the file, the rule id and the {@link
+     * dev.mesolint.core.finding.Anchor} (programme id and logical path) the fingerprint is made of, then applies the
+     * waivers in force.
+     */
+    public void report(Location location, List<Waiver> waivers, Severity severity, String message, String fix,
+            Facts facts) {
         if (severity == Severity.OFF) {
             return;
         }
         Finding finding = new Finding(rule.id(), severity, file.displayPath(), location, message, fix,
-                Optional.empty());
+                Optional.empty(), false, facts, file.anchor(location));
         file.add(finding, waivers);
     }
 
     /**
-     * Where a key of {@code subject} was written ({@code rest} of a set): on the node itself, else on the entry the
-     * value was inherited from, else the subject's own location.
+     * Where a key of {@code subject} was written ({@code rest} of a set): for a set, as the binder recorded it (on
+     * the set, else on the entry the value was inherited from); for another node, the key on the node itself; else
+     * the subject's own location.
      */
     public Location fieldLocation(Located subject, String key) {
-        LocatedDocument doc = file.document();
-        String pointer = subject.location().pointer();
-        while (true) {
-            String candidate = Pointers.child(pointer, key);
-            if (doc.values().containsKey(candidate)) {
-                Location l = doc.values().get(candidate);
-                return new Location(l.line(), l.column(), candidate);
-            }
-            // climb from a set in a list (/…/sets/2) to its entry (/…); stop at the work item
-            if (pointer.matches(".*/sets/\\d+")) {
-                pointer = pointer.substring(0, pointer.lastIndexOf("/sets/"));
-            } else {
-                return subject.location();
-            }
+        if (subject instanceof SetPrescription set) {
+            return set.placeOf(key);
         }
+        String candidate = Pointers.child(subject.location().pointer(), key);
+        Location l = file.document().values().get(candidate);
+        return l == null ? subject.location() : l.withPointer(candidate);
     }
 }

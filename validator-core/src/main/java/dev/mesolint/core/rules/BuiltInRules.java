@@ -39,6 +39,8 @@ public final class BuiltInRules {
                 new ConstraintAvoidRule(),
                 new ConstraintLoadRule(),
                 new UnusedWaiverRule(),
+                new UnusedBaselineEntryRule(),
+                new DuplicateProgrammeIdRule(),
                 new InternalErrorRule());
     }
 }

@@ -2,6 +2,7 @@ package dev.mesolint.core.rules;
 
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.AthleteConstraint;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

@@ -4,6 +4,7 @@ import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

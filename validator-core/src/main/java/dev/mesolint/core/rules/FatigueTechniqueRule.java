@@ -7,6 +7,7 @@ import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Technique;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

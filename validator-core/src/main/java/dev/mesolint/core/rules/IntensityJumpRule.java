@@ -1,10 +1,13 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.finding.Subject;
 import dev.mesolint.core.model.LiftWeek;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -87,11 +90,12 @@ public final class IntensityJumpRule implements Rule {
                 boolean top = set.exerciseId().equals(lift.exerciseId()) && set.effort().loadFraction().isPresent()
                         && Math.abs(set.effort().loadFraction().getAsDouble() - to) < ROUNDING;
                 if (top && set.prescription().load().isPresent()) {
-                    context.report(context.fieldLocation(set.prescription(), "load"), set.prescription().waivers(), message, fix);
+                    context.report(context.fieldLocation(set.prescription(), "load"), set.prescription().waivers(),
+                            context.severity(), message, fix, Facts.about(Subject.exercise(lift.exerciseId())));
                     return;
                 }
             }
         }
-        Places.reportWeek(context, week, message, fix);
+        Places.reportWeek(context, week, message, fix, Facts.about(Subject.exercise(lift.exerciseId())));
     }
 }

@@ -8,6 +8,7 @@ import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Level;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

@@ -1,9 +1,13 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Occurrences;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -95,6 +99,7 @@ public final class RecoveryGapRule implements Rule {
                 + earlier + "; the " + context.profileName() + " profile asks for at least "
                 + context.shown(MIN_HOURS) + " h between sessions that each give a muscle " + context.shown(MIN_SETS)
                 + " or more hard sets",
-                move + ", or keep the " + name + " under " + context.shown(MIN_SETS) + " hard sets in one of them");
+                move + ", or keep the " + name + " under " + context.shown(MIN_SETS) + " hard sets in one of them",
+                Facts.about(Subject.muscle(name)).measured(hours, context.param(MIN_HOURS), "h"));
     }
 }

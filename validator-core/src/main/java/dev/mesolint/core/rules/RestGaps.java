@@ -1,5 +1,7 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.rule.Edits;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.Session;
@@ -8,6 +10,7 @@ import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.programme.WorkItem;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.Durations;
@@ -60,7 +63,8 @@ final class RestGaps {
                         String fix = "rest: " + context.shown(limit.parameter())
                                 + (gap.inSuperset() ? " on the superset, the rest after each round" : "");
                         found.add(week, session, gap.work().exerciseId(), gap.where(), gap.waivers(), gap.step(),
-                                detail, fix);
+                                detail, fix, Facts.NONE.measured(rest, min, "s").withEdit(Edits.set(gap.where(),
+                                        "rest", context.shown(limit.parameter())).orElse(null)));
                     }
                 }
             }

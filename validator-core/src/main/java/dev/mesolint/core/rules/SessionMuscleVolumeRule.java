@@ -1,10 +1,14 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.MuscleSession;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Occurrences;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -54,7 +58,8 @@ public final class SessionMuscleVolumeRule implements Rule {
                             + Contributions.text(credited) + "), over the " + context.shown(MAX_SETS)
                             + " per session the " + context.profileName() + " profile allows",
                             "move " + Texts.num(over) + " of the " + Texts.muscle(muscle)
-                                    + " sets to another day, e.g. from " + Contributions.largest(credited));
+                                    + " sets to another day, e.g. from " + Contributions.largest(credited),
+                            Facts.about(Subject.muscle(Texts.muscle(muscle))).measured(sets, max, "sets"));
                 }
             }
         }

@@ -3,6 +3,8 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Occurrences;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

@@ -1,9 +1,8 @@
 package dev.mesolint.core.rules;
 
 import dev.mesolint.core.catalogue.Muscle;
-import java.util.ArrayList;
+import dev.mesolint.core.rule.Ranges;
 import java.util.Collection;
-import java.util.List;
 import java.util.TreeSet;
 
 /** Number and list wording shared by the model rules' messages. */
@@ -45,40 +44,17 @@ final class Texts {
 
     /** {@code set 2}, {@code sets 1-3}, {@code sets 1, 3-4}. */
     static String sets(Collection<Integer> numbers) {
-        TreeSet<Integer> sorted = new TreeSet<>(numbers);
-        return (sorted.size() == 1 ? "set " : "sets ") + ranges(sorted);
+        return Ranges.sets(numbers);
     }
 
     /** {@code week 2}, {@code weeks 1-4}. */
     static String weeks(Collection<Integer> numbers) {
-        TreeSet<Integer> sorted = new TreeSet<>(numbers);
-        return (sorted.size() == 1 ? "week " : "weeks ") + ranges(sorted);
+        return Ranges.weeks(numbers);
     }
 
     /** Consecutive runs joined with a hyphen: {@code 1-3, 5}. */
     static String ranges(TreeSet<Integer> sorted) {
-        List<String> parts = new ArrayList<>();
-        Integer start = null;
-        Integer previous = null;
-        for (int n : sorted) {
-            if (previous != null && n == previous + 1) {
-                previous = n;
-                continue;
-            }
-            if (start != null) {
-                parts.add(run(start, previous));
-            }
-            start = n;
-            previous = n;
-        }
-        if (start != null) {
-            parts.add(run(start, previous));
-        }
-        return String.join(", ", parts);
-    }
-
-    private static String run(int from, int to) {
-        return from == to ? Integer.toString(from) : from + "-" + to;
+        return Ranges.of(sorted);
     }
 
     /** {@code 1 set}, {@code 2.5 sets}. */

@@ -1,5 +1,8 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.rule.Edits;
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.Superset;
@@ -38,9 +41,9 @@ public final class UnknownExerciseRule implements Rule {
         }
         context.programme().athlete().constraints().forEach(c -> c.avoid().stream()
                 .filter(id -> context.exercise(id).isEmpty())
-                .forEach(id -> context.report(c.location(), List.of(),
+                .forEach(id -> context.report(c.location(), List.of(), context.severity(),
                         "constraint names unknown exercise '" + id + "'" + suggestion(context, id),
-                        fix(context, id))));
+                        fix(context, id), Facts.about(Subject.exercise(id)))));
     }
 
     private static void check(RuleContext context, WorkItem item, Set<String> reported) {
@@ -50,9 +53,13 @@ public final class UnknownExerciseRule implements Rule {
         }
         ExerciseWork work = (ExerciseWork) item;
         if (context.exercise(work.exerciseId()).isEmpty() && reported.add(work.exerciseLocation().pointer())) {
-            context.report(work.exerciseLocation(), work.waivers(),
+            List<String> closest = context.catalogue().closest(work.exerciseId(), 1);
+            Facts facts = Facts.about(Subject.exercise(work.exerciseId()));
+            context.report(work.exerciseLocation(), work.waivers(), context.severity(),
                     "unknown exercise '" + work.exerciseId() + "'" + suggestion(context, work.exerciseId()),
-                    fix(context, work.exerciseId()));
+                    fix(context, work.exerciseId()), closest.isEmpty() ? facts
+                            : facts.withEdit(Edits.set(work.exerciseLocation(), "exercise", closest.get(0))
+                                    .orElse(null)));
         }
     }
 

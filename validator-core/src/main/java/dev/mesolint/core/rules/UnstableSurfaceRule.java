@@ -4,6 +4,7 @@ import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.catalogue.Stability;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;

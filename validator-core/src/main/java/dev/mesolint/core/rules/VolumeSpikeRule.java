@@ -2,10 +2,13 @@ package dev.mesolint.core.rules;
 
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.finding.Subject;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -87,7 +90,8 @@ public final class VolumeSpikeRule implements Rule {
                         + context.profileName() + " profile flags weeks over " + context.shown(MAX_RATIO)
                         + " x that mean",
                         "raise " + name + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
-                                + " working sets this week");
+                                + " working sets this week",
+                        Facts.about(Subject.muscle(name)).measured(now, Math.floor(chronic * maxRatio), "sets"));
             }
         }
     }

@@ -1,9 +1,12 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.MuscleWeek;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -72,7 +75,8 @@ public final class WeeklyVolumeMaxRule implements Rule {
                         + Texts.sets(sets) + " (" + Contributions.text(credited) + "), over the "
                         + context.shown(limit) + " a week the " + context.profileName() + " profile allows",
                         "cut " + Texts.num(Math.ceil(sets - max)) + " " + Texts.muscle(muscle)
-                                + " sets from the week, e.g. from " + Contributions.largest(credited));
+                                + " sets from the week, e.g. from " + Contributions.largest(credited),
+                        Facts.about(Subject.muscle(Texts.muscle(muscle))).measured(sets, max, "sets"));
             }
         }
     }

@@ -1,8 +1,11 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.Subject;
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -60,7 +63,8 @@ public final class WeeklyVolumeMinRule implements Rule {
                         + context.profileName() + " profile asks for a muscle the programme trains directly ("
                         + exercise + ")",
                         "add " + Texts.num(missing) + " hard " + (missing == 1 ? "set" : "sets") + " for the "
-                                + Texts.muscle(muscle) + " (e.g. on " + exercise + "), or drop the direct work");
+                                + Texts.muscle(muscle) + " (e.g. on " + exercise + "), or drop the direct work",
+                        Facts.about(Subject.muscle(Texts.muscle(muscle))).measured(sets, min, "sets"));
             });
         }
     }

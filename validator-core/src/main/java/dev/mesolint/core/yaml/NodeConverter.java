@@ -159,7 +159,8 @@ final class NodeConverter {
     }
 
     private static Location locate(Node node, String pointer) {
-        Location mark = LocatedYamlReader.at(node.getStartMark());
-        return new Location(mark.line(), mark.column(), pointer);
+        Location start = LocatedYamlReader.at(node.getStartMark());
+        Location end = LocatedYamlReader.at(node.getEndMark());
+        return new Location(start.line(), start.column(), end.line(), end.column(), pointer);
     }
 }

@@ -33,8 +33,10 @@ class CachedCheckTests {
         cacheFile = dir.resolve("target/mesolint/cache.json");
         Files.writeString(programmes.resolve("good.yaml"), Programmes.oneWeek());
         Files.writeString(programmes.resolve("misspelt.yaml"), Programmes.oneWeek()
+                .replace("id: harbour-test", "id: harbour-misspelt")
                 .replace("barbell-bench-press", "barbel-bench-press"));
         Files.writeString(programmes.resolve("waived.yaml"), Programmes.oneWeek()
+                .replace("id: harbour-test", "id: harbour-waived")
                 .replace("barbell-bench-press", "harbour-sled-press")
                 .replace("rest: 3min", "rest: 3min\n            waive: [{rule: unknown-exercise, reason: club sled}]"));
     }
@@ -80,12 +82,27 @@ class CachedCheckTests {
     @Test
     void onlyTheEditedFileIsCheckedAgain() throws IOException {
         run();
-        Files.writeString(programmes.resolve("misspelt.yaml"), Programmes.oneWeek());
+        Files.writeString(programmes.resolve("misspelt.yaml"), Programmes.oneWeek()
+                .replace("id: harbour-test", "id: harbour-misspelt"));
 
         CachedCheck.Outcome second = run();
         assertEquals(2, second.reused());
         assertEquals(1, second.checked());
         assertFalse(second.report().failed(), "the fix is seen, not the stored failure");
+    }
+
+    @Test
+    void aSharedProgrammeIdIsFoundAmongCachedFilesToo() throws IOException {
+        run();
+        // The edited file takes the id of a cached one: the two are compared although one was not checked again.
+        Files.writeString(programmes.resolve("misspelt.yaml"), Programmes.oneWeek());
+        CachedCheck.Outcome second = run();
+        assertEquals(2, second.reused());
+        List<String> shared = second.report().active().stream()
+                .filter(f -> f.ruleId().equals("duplicate-programme-id")).map(f -> f.file() + ":" + f.location())
+                .sorted().toList();
+        assertEquals(List.of("programmes/good.yaml:3:7", "programmes/misspelt.yaml:3:7"), shared);
+        assertTrue(second.report().failed());
     }
 
     @Test

@@ -141,4 +141,36 @@ class StrengthFiguresTests {
         assertEquals(0.875, squat.get(1).topSetFraction().getAsDouble(), 1e-9);
         assertTrue(m.liftWeeks("dumbbell-curl").isEmpty());
     }
+
+    @Test
+    void eachWeeksIntensityReadsTheOneRepMaxInForceThatWeek() throws Exception {
+        // The 1RM restated from week 3 (docs/format.md, a rising 1RM): the same 100 kg is 80% of 125 kg, then 62.5% of
+        // 160 kg. Volume load does not change with the 1RM (reps x weight).
+        String yaml = dev.mesolint.core.testing.Programmes.HEADER + """
+                athlete:
+                  one-rep-max:
+                    barbell-back-squat:
+                      - {from-week: 1, load: 125kg}
+                      - {from-week: 3, load: 160kg}
+                weeks:
+                  - week: 1
+                    sessions:
+                      - day: 1
+                        work:
+                          - {exercise: barbell-back-squat, sets: 3, reps: 5, load: 100kg, rest: 3min}
+                  - {week: 2, repeat: 1}
+                  - {week: 3, repeat: 1}
+                  - {week: 4, repeat: 1}
+                """;
+        dev.mesolint.core.format.ProgrammeBinder.Result bound = new dev.mesolint.core.format.ProgrammeBinder()
+                .bind(new dev.mesolint.core.yaml.LocatedYamlReader(dev.mesolint.core.yaml.YamlLimits.DEFAULTS)
+                        .read(yaml));
+        assertEquals(List.of(), bound.violations());
+        List<LiftWeek> squat = ProgrammeMetrics.compute(bound.programme().orElseThrow(), TestExercises.CATALOGUE)
+                .liftWeeks(SQUAT);
+        assertEquals(List.of(0.8, 0.8, 0.625, 0.625),
+                squat.stream().map(l -> Math.round(l.topSetFraction().getAsDouble() * 1000) / 1000.0).toList());
+        assertEquals(List.of(15.0, 15.0, 0.0, 0.0), squat.stream().map(LiftWeek::heavyReps).toList());
+        squat.forEach(l -> assertEquals(1500, l.volumeLoad().getAsDouble(), 1e-9));
+    }
 }

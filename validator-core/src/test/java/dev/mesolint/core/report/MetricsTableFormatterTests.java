@@ -30,6 +30,17 @@ class MetricsTableFormatterTests {
     }
 
     @Test
+    void liftsAreRowsOfTheirTopSetsPercentOfOneRepMax() {
+        // Bench 75% of 1RM in week 1, 65% in the deload week; squat 100 kg of a 140 kg 1RM = 71.4% (100 / 140).
+        assertTrue(line("barbell-bench-press ").matches("barbell-bench-press\\s+75\\.0\\s+65\\.0"),
+                line("barbell-bench-press "));
+        assertTrue(line("barbell-back-squat ").matches("barbell-back-squat\\s+71\\.4\\s+71\\.4"),
+                line("barbell-back-squat "));
+        // A weight with no 1RM (the row at 60 kg) has no share of 1RM: no row.
+        assertTrue(text.lines().noneMatch(l -> l.startsWith("barbell-row ")), text);
+    }
+
+    @Test
     void sessionsListTheirMinutes() {
         List<String> sessionLines = text.lines().filter(l -> l.matches("\\d\\s+\\d\\s+.*")).toList();
         assertEquals(6, sessionLines.size(), text);

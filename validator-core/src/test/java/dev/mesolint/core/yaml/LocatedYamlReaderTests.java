@@ -23,17 +23,14 @@ class LocatedYamlReaderTests {
                   - week: 1
                     sessions: []
                 """);
-        assertEquals(new Location(2, 7, "/programme/id"), withPointer(doc.valueAt("/programme/id"), "/programme/id"));
+        // "harbour-test" starts at column 7 and is 12 characters long: the span ends at column 19
+        assertEquals(new Location(2, 7, 2, 19, "/programme/id"), doc.valueAt("/programme/id"));
         assertEquals(2, doc.keyAt("/programme/id").line());
         assertEquals(3, doc.keyAt("/programme/id").column());
         assertEquals(4, doc.valueAt("/weeks/0/week").line());
         assertEquals(11, doc.valueAt("/weeks/0/week").column());
         // an unwritten pointer falls back to its nearest written ancestor
         assertEquals(4, doc.valueAt("/weeks/0/deload").line());
-    }
-
-    private static Location withPointer(Location l, String pointer) {
-        return new Location(l.line(), l.column(), pointer);
     }
 
     @Test

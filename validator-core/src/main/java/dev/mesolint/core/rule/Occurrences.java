@@ -1,13 +1,14 @@
-package dev.mesolint.core.rules;
+package dev.mesolint.core.rule;
 
+import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.finding.Subject;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
-import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.source.Location;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -36,23 +37,29 @@ import java.util.TreeSet;
  * <li>{@link SetHits}: the model rules' per-set hits, grouped by written place; the rule words the finding from
  *     the group and adds it with {@link Group#add}.</li>
  * </ul>
- * Then {@link #report} reports them all. Confined to one rule run for one file.
+ * Then {@link #report} reports them all, each finding's {@link Subject} carrying its weeks. Part of the API for rule
+ * packs: their rules merge repeated weeks the same way. Confined to one rule run for one file.
  */
-final class Occurrences {
+public final class Occurrences {
     /** Stands for the weeks in a message until the findings are reported: {@code week 2}, {@code weeks 1-4}. */
-    static final String WEEKS = "{weeks}";
+    public static final String WEEKS = "{weeks}";
 
     /** Which set or round of an exercise an occurrence is about: {@code set 2 -> 3}, {@code round 1}. */
-    record Step(String noun, String label) {
-        static final Step NONE = new Step("", "");
+    public record Step(String noun, String label) {
+        public static final Step NONE = new Step("", "");
     }
 
-    /** A finding as reported, but for its weeks. Location equality includes the line; waivers compare by identity. */
-    private record Finding(Location where, List<Waiver> waivers, Severity severity, String message, String fix) {
+    /**
+     * A finding as reported, but for its weeks. Location equality includes the line; waivers compare by identity;
+     * the facts' weeks are filled in when reported.
+     */
+    private record Finding(Location where, List<Waiver> waivers, Severity severity, String message, String fix,
+            Facts facts) {
     }
 
     /** A problem of one exercise at one written place, whose steps are collected week by week. */
-    private record StepKey(String pointer, List<Waiver> waivers, String subject, String detail, String fix) {
+    private record StepKey(String pointer, List<Waiver> waivers, String subject, String detail, String fix,
+            Facts facts) {
     }
 
     private static final class Steps {
@@ -76,8 +83,14 @@ final class Occurrences {
      * Adds week {@code week}'s finding; {@link #WEEKS} in {@code message} (its first occurrence) stands for the
      * weeks. Reported at {@code severity}: {@link RuleContext#severity()}, or a second severity derived from it.
      */
-    void add(int week, Location where, List<Waiver> waivers, Severity severity, String message, String fix) {
-        findings.computeIfAbsent(new Finding(where, List.copyOf(waivers), severity, message, fix),
+    public void add(int week, Location where, List<Waiver> waivers, Severity severity, String message, String fix) {
+        add(week, where, waivers, severity, message, fix, Facts.NONE);
+    }
+
+    /** As {@link #add(int, Location, List, Severity, String, String)}, with what the finding is about. */
+    public void add(int week, Location where, List<Waiver> waivers, Severity severity, String message, String fix,
+            Facts facts) {
+        findings.computeIfAbsent(new Finding(where, List.copyOf(waivers), severity, message, fix, facts),
                 f -> new TreeSet<>()).add(week);
     }
 
@@ -86,13 +99,23 @@ final class Occurrences {
      * {@code subject, weeks 1-4 day 1 (Lower), sets 1-3: detail}. Occurrences are merged only when they share the
      * place, the waivers in force and the wording; weeks are merged only when the same steps are affected.
      *
-     * @param subject what the finding is about, e.g. the exercise id
+     * @param subject the exercise id the finding is about
      * @param step    the set or round, or {@link Step#NONE} for a finding about the exercise as a whole
      * @param detail  what was measured against which limit
      */
-    void add(Week week, Session session, String subject, Location where, List<Waiver> waivers, Step step,
+    public void add(Week week, Session session, String subject, Location where, List<Waiver> waivers, Step step,
             String detail, String fix) {
-        Steps s = steps.computeIfAbsent(new StepKey(where.pointer(), waivers, subject, detail, fix),
+        add(week, session, subject, where, waivers, step, detail, fix, Facts.NONE);
+    }
+
+    /**
+     * As {@link #add(Week, Session, String, Location, List, Step, String, String)}, with a measure or an edit; the
+     * subject's exercise and day are filled in from {@code subject} and {@code session}.
+     */
+    public void add(Week week, Session session, String subject, Location where, List<Waiver> waivers, Step step,
+            String detail, String fix, Facts facts) {
+        Facts about = facts.withSubject(facts.subject().or(Subject.exercise(subject).withDay(session.day())));
+        Steps s = steps.computeIfAbsent(new StepKey(where.pointer(), waivers, subject, detail, fix, about),
                 k -> new Steps(where, session.label(), step.noun()));
         Set<String> labels = s.byWeek.computeIfAbsent(week.number(), w -> new LinkedHashSet<>());
         if (!step.label().isEmpty()) {
@@ -101,13 +124,14 @@ final class Occurrences {
     }
 
     /** Reports every finding added, once per place and wording, with the weeks it occurs in. */
-    void report(RuleContext context) {
+    public void report(RuleContext context) {
         steps.forEach((k, s) -> s.byWeek.forEach((week, labels) -> add(week, s.where, k.waivers(),
                 context.severity(), k.subject() + ", " + WEEKS + " " + s.day + steps(s.noun, List.copyOf(labels))
-                        + ": " + k.detail(), k.fix())));
+                        + ": " + k.detail(), k.fix(), k.facts())));
         steps.clear();
         findings.forEach((f, weeks) -> context.report(f.where(), f.waivers(), f.severity(),
-                withWeeks(f.message(), weeks), f.fix()));
+                withWeeks(f.message(), weeks), f.fix(),
+                f.facts().withSubject(f.facts().subject().withWeeks(List.copyOf(weeks)))));
         findings.clear();
     }
 
@@ -115,7 +139,7 @@ final class Occurrences {
     private static String withWeeks(String message, Set<Integer> weeks) {
         int at = message.indexOf(WEEKS);
         return at < 0 ? message
-                : message.substring(0, at) + Texts.weeks(weeks) + message.substring(at + WEEKS.length());
+                : message.substring(0, at) + Ranges.weeks(weeks) + message.substring(at + WEEKS.length());
     }
 
     /** {@code , sets 1-3}, {@code , rounds 1 -> 2, 2 -> 3}, or nothing for a finding without steps. */
@@ -127,7 +151,7 @@ final class Occurrences {
         if (labels.stream().allMatch(s -> s.matches("\\d+"))) {
             TreeSet<Integer> numbers = new TreeSet<>();
             labels.forEach(s -> numbers.add(Integer.parseInt(s)));
-            return ", " + noun + " " + Texts.ranges(numbers);
+            return ", " + noun + " " + Ranges.of(numbers);
         }
         return ", " + noun + " " + String.join(", ", labels);
     }
@@ -139,7 +163,7 @@ final class Occurrences {
      *
      * @param <T> what the rule keeps of each hit for its message
      */
-    static final class SetHits<T> {
+    public static final class SetHits<T> {
         private final Map<List<Object>, Group<T>> groups = new LinkedHashMap<>();
 
         /**
@@ -147,7 +171,8 @@ final class Occurrences {
          * @param key   hits with different keys are reported apart: put the measured value or the kind of problem
          *              in it, and the week number when the message quotes figures that differ from week to week
          */
-        void add(WeekMetrics week, SessionMetrics session, SetMetrics set, Location where, Object key, T value) {
+        public void add(WeekMetrics week, SessionMetrics session, SetMetrics set, Location where, Object key,
+                T value) {
             List<Object> id = List.of(session.day(), session.location().pointer(), where, set.exerciseId(),
                     List.copyOf(set.prescription().waivers()), key);
             Group<T> group = groups.computeIfAbsent(id,
@@ -157,33 +182,40 @@ final class Occurrences {
             group.values().add(value);
         }
 
-        List<Group<T>> groups() {
+        public List<Group<T>> groups() {
             return List.copyOf(groups.values());
         }
     }
 
     /** The hits of one place, in the order done; {@link #first()} stands for them in the message. */
-    record Group<T>(SessionMetrics session, Location where, List<SetMetrics> sets, TreeSet<Integer> weeks,
+    public record Group<T>(SessionMetrics session, Location where, List<SetMetrics> sets, TreeSet<Integer> weeks,
             List<T> values) {
 
-        SetMetrics first() {
+        public SetMetrics first() {
             return sets.get(0);
         }
 
         /** The set numbers, in the order done (several weeks may repeat them). */
-        List<Integer> numbers() {
+        public List<Integer> numbers() {
             return sets.stream().map(SetMetrics::setNumber).toList();
         }
 
         /** {@code barbell-back-squat, {weeks} day 2 (Lower), sets 1-3}: {@link #WEEKS} becomes the group's weeks. */
-        String label() {
-            return first().exerciseId() + ", " + WEEKS + " " + Places.day(session) + ", " + Texts.sets(numbers());
+        public String label() {
+            return first().exerciseId() + ", " + WEEKS + " " + Places.day(session) + ", " + Ranges.sets(numbers());
         }
 
         /** Adds the group's finding to {@code out} for each of its weeks, with the set's waivers. */
-        void add(Occurrences out, Severity severity, String message, String fix) {
+        public void add(Occurrences out, Severity severity, String message, String fix) {
+            add(out, severity, message, fix, Facts.NONE);
+        }
+
+        /** As {@link #add(Occurrences, Severity, String, String)}, with a measure or an edit. */
+        public void add(Occurrences out, Severity severity, String message, String fix, Facts facts) {
+            Facts about = facts.withSubject(facts.subject()
+                    .or(Subject.exercise(first().exerciseId()).withDay(session.day())));
             for (int week : weeks) {
-                out.add(week, where, first().prescription().waivers(), severity, message, fix);
+                out.add(week, where, first().prescription().waivers(), severity, message, fix, about);
             }
         }
     }
