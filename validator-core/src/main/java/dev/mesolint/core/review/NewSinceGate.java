@@ -63,9 +63,10 @@ public final class NewSinceGate {
                     findings.add(f);
                 }
             }
-            files.add(new FileReport(file.displayPath(), file.programme(), file.profile(), findings, file.metrics()));
+            files.add(file.withFindings(findings));
         }
-        return new RunReport(files, review.after().failOn(), review.after().missing());
+        // Compared with the base: "held" and "new" mean something, as with a baseline.
+        return new RunReport(files, review.after().failOn(), review.after().missing(), true);
     }
 
     private boolean alwaysCounts(Finding f) {

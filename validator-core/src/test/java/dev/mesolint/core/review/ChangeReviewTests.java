@@ -185,14 +185,23 @@ class ChangeReviewTests {
     void aProfileChangedInTheConfigurationChangesTheFindingsOfAnUnchangedFile() throws Exception {
         try (GitFixture repo = GitFixture.init(folder)) {
             String base = repo.write(BLOCK, ReviewProgrammes.block()).commit("block");
-            // general-fitness asks for fewer weekly sets than hypertrophy (docs/profiles.md): the floor findings go.
-            String head = repo.write(".mesolint.yaml", "profile: general-fitness\n").commit("general fitness");
+            // A team profile that asks for 3 minutes after every compound set: the 2-minute row rests now fall short.
+            repo.write(".mesolint/profiles/long-rests.yaml", """
+                    profile: harbourside-long-rests
+                    extends: hypertrophy
+                    rules:
+                      short-rest-compound: {min-rest: 3min}
+                    """);
+            String head = repo.write(".mesolint.yaml", "profile: .mesolint/profiles/long-rests.yaml\n")
+                    .commit("longer rests for the whole club");
             ProgrammeChange change = only(review(repo, base, head));
             assertEquals(ProgrammeChange.Status.UNCHANGED, change.status());
             assertEquals(Optional.of("hypertrophy"), change.profileBefore());
-            assertEquals(Optional.of("general-fitness"), change.profileAfter());
-            assertEquals(FigureChanges.NONE, change.figures());
-            assertTrue(change.findings().changed());
+            assertEquals(Optional.of("harbourside-long-rests"), change.profileAfter());
+            assertEquals(FigureChanges.NONE, change.figures(), "the same programme has the same figures");
+            assertEquals(List.of("short-rest-compound"), rulesOf(change.findings().introduced()));
+            assertEquals(List.of(), change.findings().resolved());
+            assertEquals(7, change.findings().unchanged().size(), "the floor findings match across profiles");
         }
     }
 
