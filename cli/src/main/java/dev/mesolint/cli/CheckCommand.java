@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
@@ -140,7 +141,7 @@ final class CheckCommand implements Callable<Integer> {
             built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
                     + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
             if (!noBaseline) {
-                report = workspace.applyBaseline(report);
+                report = Baseline.applyConfigured(workspace, report);
             }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());

@@ -1,6 +1,7 @@
 package dev.mesolint.core.engine;
 
 import dev.mesolint.core.config.ConfigDocument;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Waiver;
@@ -8,7 +9,6 @@ import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.rules.UnusedWaiverRule;
 import java.util.Collections;
 import java.util.IdentityHashMap;
 import java.util.List;
@@ -27,7 +27,8 @@ final class WaiverAudit {
     }
 
     void report(FileScope scope) {
-        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(UnusedWaiverRule.ID)).findFirst().orElse(null);
+        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(FrameworkRules.UNUSED_WAIVER)).findFirst()
+                .orElse(null);
         if (audit == null) {
             return;
         }
