@@ -185,12 +185,12 @@ class ChangeReviewTests {
     void aProfileChangedInTheConfigurationChangesTheFindingsOfAnUnchangedFile() throws Exception {
         try (GitFixture repo = GitFixture.init(folder)) {
             String base = repo.write(BLOCK, ReviewProgrammes.block()).commit("block");
-            // A team profile that asks for 3 minutes after every compound set: the 2-minute row rests now fall short.
+            // A team profile asking 3 minutes after compound assistance sets: the 2-minute row rests now fall short.
             repo.write(".mesolint/profiles/long-rests.yaml", """
                     profile: harbourside-long-rests
                     extends: hypertrophy
                     rules:
-                      short-rest-compound: {min-rest: 3min}
+                      short-rest-compound: {min-rest-assistance: 3min}
                     """);
             String head = repo.write(".mesolint.yaml", "profile: .mesolint/profiles/long-rests.yaml\n")
                     .commit("longer rests for the whole club");
