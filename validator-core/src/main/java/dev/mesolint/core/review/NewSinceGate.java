@@ -30,34 +30,41 @@ public final class NewSinceGate {
                 .forEach(r -> safetyRules.add(r.id()));
     }
 
-    /** The head's run with the findings the base already had marked as held, but for the policy's exceptions. */
-    public RunReport apply(Review review) {
-        return mark(review, true);
+    /**
+     * {@code run} (a check of the head, baseline or not) with the findings the review found unchanged since the base
+     * marked as held, but for the policy's exceptions. Findings are matched by fingerprint, one for one.
+     */
+    public RunReport apply(RunReport run, Review review) {
+        return mark(run, review, true);
     }
 
     /**
-     * The head's run with every finding the base already had marked as held, exceptions included: what each
+     * The review's head with every finding the base already had marked as held, exceptions included: what each
      * finding's state is, rather than whether it counts (SARIF's {@code baselineState}).
      */
     static RunReport markUnchanged(Review review) {
-        return new NewSinceGate(List.of()).mark(review, false);
+        return new NewSinceGate(List.of()).mark(review.after(), review, false);
     }
 
-    private RunReport mark(Review review, boolean policy) {
+    private RunReport mark(RunReport run, Review review, boolean policy) {
         Map<String, ProgrammeChange> byHeadPath = new HashMap<>();
         review.programmes().forEach(p -> p.after().ifPresent(path -> byHeadPath.put(path, p)));
         List<FileReport> files = new ArrayList<>();
-        for (FileReport file : review.after().files()) {
+        for (FileReport file : run.files()) {
             ProgrammeChange change = byHeadPath.get(file.displayPath());
             if (change == null || policy && (!change.loadedBefore() || !change.loadedAfter())) {
                 files.add(file);
                 continue;
             }
-            // Held findings are matched one for one, by identity, as FindingChanges sorted them.
-            List<Finding> held = new ArrayList<>(change.findings().unchanged());
+            Map<String, Integer> held = new HashMap<>();
+            change.findings().unchanged().forEach(f -> held.merge(RevisionFingerprint.of(f, file.displayPath()), 1,
+                    Integer::sum));
             List<Finding> findings = new ArrayList<>();
             for (Finding f : file.findings()) {
-                if (!(policy && alwaysCounts(f)) && held.remove(f)) {
+                String print = RevisionFingerprint.of(f, file.displayPath());
+                boolean counted = !f.waived() && !f.baselined() && f.severity() != Severity.OFF;
+                if (counted && !(policy && alwaysCounts(f)) && held.getOrDefault(print, 0) > 0) {
+                    held.merge(print, -1, Integer::sum);
                     findings.add(f.asBaselined());
                 } else {
                     findings.add(f);
@@ -66,7 +73,7 @@ public final class NewSinceGate {
             files.add(file.withFindings(findings));
         }
         // Compared with the base: "held" and "new" mean something, as with a baseline.
-        return new RunReport(files, review.after().failOn(), review.after().missing(), true);
+        return new RunReport(files, run.failOn(), run.missing(), true);
     }
 
     private boolean alwaysCounts(Finding f) {
