@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
         footer = {"", ConfigOptions.PRECEDENCE, "",
             MesolintCommand.EXIT_CODES,
             "", "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
+        subcommands = {CheckCommand.class, DiffCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
             ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
             AutoComplete.GenerateCompletion.class,
             CommandLine.HelpCommand.class})

@@ -23,13 +23,18 @@ public final class ReportFiles {
 
     /** Writes {@code input} in the target's format to the target's path (UTF-8), replacing any earlier file. */
     public static void write(ReportInput input, ReportTarget target) throws IOException {
-        Path path = target.path().toAbsolutePath().normalize();
+        write(input, target.path(), target.format().writer(target.path().toAbsolutePath()));
+    }
+
+    /** Writes {@code input} with {@code writer} to {@code file} (UTF-8), replacing any earlier file. */
+    public static void write(ReportInput input, Path file, ReportWriter writer) throws IOException {
+        Path path = file.toAbsolutePath().normalize();
         Path folder = path.getParent();
         Files.createDirectories(folder);
         Path temporary = temporaryFile(folder, "." + path.getFileName() + ".");
         try {
             try (Writer out = new SafeWriter(Files.newBufferedWriter(temporary, StandardCharsets.UTF_8))) {
-                target.format().writer(path).write(input, out);
+                writer.write(input, out);
             }
             moveIntoPlace(temporary, path);
         } finally {

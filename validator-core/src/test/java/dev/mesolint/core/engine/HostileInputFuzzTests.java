@@ -50,7 +50,7 @@ class HostileInputFuzzTests {
 
     @Property(tries = 2000, shrinking = ShrinkingMode.OFF, seed = "20261202")
     void everyMutatedProgrammeIsReportedWithoutAnInternalError(@ForAll("mutated") String text) throws IOException {
-        FileReport report = CHECKER.checkFile(Path.of("fuzz/mutated.yaml"), text.getBytes(StandardCharsets.UTF_8));
+        FileReport report = CHECKER.checkFile(ROOT.resolve("fuzz/mutated.yaml"), text.getBytes(StandardCharsets.UTF_8));
         assertEquals("fuzz/mutated.yaml", report.displayPath());
         List<String> internal = report.findings().stream().filter(f -> f.ruleId().equals(FrameworkRules.INTERNAL_ERROR))
                 .map(Finding::message).toList();
