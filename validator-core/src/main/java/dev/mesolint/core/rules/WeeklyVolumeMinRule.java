@@ -42,8 +42,8 @@ public final class WeeklyVolumeMinRule implements Rule {
                     RuleParameter.number(MAX_RIR, 3, 0, 30,
                             "Most reps in reserve a set may leave and still count; 3 counts the model's hard sets.")),
             "Weekly sets per muscle drive growth, and the dose-response meta-analyses find small effects at the "
-                    + "lowest volumes (fewer than 5 weekly sets still grew muscle, though less than 10 or more did: Schoenfeld, "
-                    + "Ogborn & Krieger 2017). When a programme gives a muscle an exercise of its own but fewer than "
+                    + "lowest volumes (fewer than 5 weekly sets still grew muscle, though less than 10 or more did: "
+                    + "Schoenfeld, Ogborn & Krieger 2017). When a programme gives a muscle an exercise of its own but fewer than "
                     + "about four hard sets in the week, the exercise costs a place in the session for little "
                     + "return: add sets, or drop the direct work and let the compound lifts cover the muscle. "
                     + "Muscles only ever trained as synergists are not checked (the programme does not aim at them), "
