@@ -16,18 +16,20 @@ import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
 import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rule.WeeklyVolumeLimit;
 import dev.mesolint.core.source.Location;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.TreeMap;
 
 /**
  * A muscle the programme trains directly gets too few counted sets in a week to be worth its time: one finding per
  * muscle for all the weeks it falls short in (the cause, the direct work's volume, is the same), not one a week.
  */
-public final class WeeklyVolumeMinRule implements Rule {
+public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     public static final String ID = "weekly-volume-min";
     static final String MIN_SETS = "min-sets";
     static final String MAX_RIR = "max-rir";
@@ -64,6 +66,11 @@ public final class WeeklyVolumeMinRule implements Rule {
     /** The weekly floor under {@code settings}. */
     public static double floor(RuleSettings settings) {
         return settings.value(MIN_SETS);
+    }
+
+    @Override
+    public OptionalDouble weeklyFloor(RuleSettings settings, Muscle muscle) {
+        return OptionalDouble.of(floor(settings));
     }
 
     @Override
