@@ -18,6 +18,7 @@ import dev.mesolint.core.rule.RuleParameter;
 import dev.mesolint.core.rule.RuleSettings;
 import dev.mesolint.core.rule.WeeklyVolumeLimit;
 import dev.mesolint.core.source.Location;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -39,10 +40,7 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
                     + "hard sets a week; deload weeks are skipped, and the weeks a muscle falls short in are one "
                     + "finding.",
             Severity.INFO, RuleMetadata.Category.VOLUME,
-            List.of(RuleParameter.number(MIN_SETS, 4, 1, 20,
-                            "Fewest credited sets a week for a muscle the programme trains directly."),
-                    RuleParameter.number(MAX_RIR, 3, 0, 30,
-                            "Most reps in reserve a set may leave and still count; 3 counts the model's hard sets.")),
+            parameters(),
             "Weekly sets per muscle drive growth, and the dose-response meta-analyses find small effects at the "
                     + "lowest volumes (fewer than 5 weekly sets still grew muscle, though less than 10 or more did: "
                     + "Schoenfeld, Ogborn & Krieger 2017). When a programme gives a muscle an exercise of its own but fewer than "
@@ -56,12 +54,26 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
                     + "novices and general fitness. The strength profile turns the rule off: its floor is a growth "
                     + "dose, while 1RM strength rises on single sets done 2-3 times a week (Androulakis-Korakakis, "
                     + "Fisher & Steele 2020) and heavy strength sets are far from failure by design, so they are not "
-                    + "hard sets. The 4-set threshold is common practice drawn from the dose-response literature.",
+                    + "hard sets. The 4-set threshold is common practice drawn from the dose-response literature. Sets that "
+                    + "reps in reserve do not describe count as well, at their credit: ballistic and Olympic lifts "
+                    + "always, and under the general-fitness profile strength-purpose sets (at most 6 reps at 60% of "
+                    + "1RM or more), which stay far from failure on purpose; the message then says \"hard and "
+                    + "strength sets\".",
             "Schoenfeld, Ogborn & Krieger 2017, J Sports Sci 35(11):1073-1082; Pelland et al. 2024; ACSM 2009 "
                     + "position stand (Ratamess et al., MSSE 41(3):687-708) and Garber et al. 2011, MSSE "
                     + "43(7):1334-1359 (general fitness: 1 set of 8-12 reps, 2-3 days a week); "
                     + "Androulakis-Korakakis, Fisher & Steele 2020, Sports Med 50(4):751-765 (strength); the 4-set "
                     + "threshold is common practice drawn from that dose-response literature");
+
+    private static List<RuleParameter> parameters() {
+        List<RuleParameter> all = new ArrayList<>();
+        all.add(RuleParameter.number(MIN_SETS, 4, 1, 20,
+                "Fewest credited sets a week for a muscle the programme trains directly."));
+        all.add(RuleParameter.number(MAX_RIR, 3, 0, 30,
+                "Most reps in reserve a set may leave and still count; 3 counts the model's hard sets."));
+        all.addAll(StrengthSets.parameters());
+        return List.copyOf(all);
+    }
 
     /** The weekly floor under {@code settings}. */
     public static double floor(RuleSettings settings) {
@@ -86,25 +98,30 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
         context.metrics().directlyTrained().forEach((muscle, exercise) -> {
             // Weeks short of the floor, split by the waivers written on each week, so a waiver keeps to its week.
             Map<List<Waiver>, TreeMap<Integer, Double>> shortWeeks = new LinkedHashMap<>();
+            boolean[] strength = {false};
             for (WeekMetrics week : context.metrics().weeks()) {
-                double sets = counted(context, week, muscle, maxRir);
+                double sets = counted(context, week, muscle, maxRir, false);
+                double strengthSets = counted(context, week, muscle, maxRir, true);
+                strength[0] |= strengthSets > 0;
+                sets += strengthSets;
                 if (!week.deload() && sets < min) {
                     List<Waiver> waivers = Places.week(context, week.number()).map(Week::waivers).orElse(List.of());
                     shortWeeks.computeIfAbsent(waivers, w -> new TreeMap<>()).put(week.number(), sets);
                 }
             }
             shortWeeks.forEach((waivers, weeks) -> add(context, found, muscle, exercise, waivers, weeks, min,
-                    maxRir));
+                    maxRir, strength[0]));
         });
         found.report(context);
     }
 
     private static void add(RuleContext context, Occurrences found, Muscle muscle, String exercise,
-            List<Waiver> waivers, TreeMap<Integer, Double> weeks, double min, double maxRir) {
+            List<Waiver> waivers, TreeMap<Integer, Double> weeks, double min, double maxRir, boolean strength) {
         double fewest = weeks.values().stream().mapToDouble(Double::doubleValue).min().orElseThrow();
         double most = weeks.values().stream().mapToDouble(Double::doubleValue).max().orElseThrow();
-        String noun = maxRir == context.metrics().parameters().hardSetMaxRir() ? "hard sets"
-                : "sets at RIR " + Texts.num(maxRir) + " or closer";
+        boolean hard = maxRir == context.metrics().parameters().hardSetMaxRir();
+        String noun = hard ? (strength ? "hard and strength sets" : "hard sets")
+                : "sets at RIR " + Texts.num(maxRir) + " or closer" + (strength ? " or for strength" : "");
         String counted = fewest == most ? Texts.num(fewest) : Texts.num(fewest) + "-" + Texts.num(most);
         double missing = Math.ceil(min - fewest);
         String name = Texts.muscle(muscle);
@@ -131,14 +148,17 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     }
 
     /**
-     * Credited sets for {@code muscle} leaving at most {@code maxRir} in reserve (1 a prime-mover set, 0.5 a
-     * synergist set), the way the model credits hard sets; sets of unknown effort do not count.
+     * Credited sets for {@code muscle} (1 a prime-mover set, 0.5 a synergist set, the way the model credits hard
+     * sets): with {@code strength} false those leaving at most {@code maxRir} in reserve (sets of unknown effort do
+     * not count); with it true the others that are strength-purpose or ballistic.
      */
-    private static double counted(RuleContext context, WeekMetrics week, Muscle muscle, double maxRir) {
+    private static double counted(RuleContext context, WeekMetrics week, Muscle muscle, double maxRir,
+            boolean strength) {
         double sets = 0;
         for (SessionMetrics session : week.sessions()) {
             for (SetMetrics set : session.sets()) {
-                if (set.effortKnown() && set.rir().getAsDouble() <= maxRir) {
+                boolean close = set.effortKnown() && set.rir().getAsDouble() <= maxRir;
+                if (strength ? !close && StrengthSets.notJudged(context, set) : close) {
                     sets += context.exercise(set.exerciseId()).map(e -> e.credit(muscle)).orElse(0.0);
                 }
             }
