@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
@@ -137,8 +138,10 @@ final class CheckCommand implements Callable<Integer> {
             checker = built;
             report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
                     .orElseGet(built::run));
+            built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
+                    + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
             if (!noBaseline) {
-                report = workspace.applyBaseline(report);
+                report = Baseline.applyConfigured(workspace, report);
             }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());

@@ -167,6 +167,23 @@ class CheckOutputTests {
     }
 
     @Test
+    void aWaiverForAMisspeltRuleSuggestsTheRuleMeant() throws IOException {
+        Files.createDirectories(root.resolve(".git"));
+        Path file = root.resolve("block.yaml");
+        Files.writeString(file, PROGRAMME + """
+                            waive:
+                              - rule: short-rest-compund
+                                reason: Timed circuit day for the club's open session.
+                """);
+
+        Run r = run("check", file.toString());
+
+        assertTrue(r.out().contains("waiver for 'short-rest-compund' names no known rule"), r.out());
+        assertTrue(r.out().contains("fix: did you mean 'short-rest-compound'? correct the rule id, or remove the "
+                + "waiver"), r.out());
+    }
+
+    @Test
     void aCompletionScriptIsGenerated() {
         Run r = run("generate-completion");
 

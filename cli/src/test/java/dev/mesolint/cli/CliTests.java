@@ -143,6 +143,25 @@ class CliTests {
     }
 
     @Test
+    void reportsCarryTheTrainingFiguresWithABaselineConfigured() throws IOException {
+        write("programmes/block.yaml", PROGRAMME);
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\n");
+        assertEquals(0, run("baseline", "--root", rootArg(), root.resolve("programmes").toString()).exit());
+        Path json = root.resolve("out/check.json");
+        Path html = root.resolve("out/check.html");
+        Run r = run("check", "--root", rootArg(), "--report", "json=" + json, "--report", "html=" + html,
+                root.resolve("programmes").toString());
+        assertEquals(0, r.exit(), r.out() + r.err());
+        assertTrue(r.out().contains("2 baselined"), r.out());
+        String jsonText = Files.readString(json);
+        assertTrue(jsonText.contains("\"metrics\""), "the JSON report keeps its figures: " + jsonText);
+        assertTrue(jsonText.contains("\"baselined\" : 2") || jsonText.contains("\"baselined\":2"), jsonText);
+        String page = Files.readString(html);
+        assertFalse(page.contains("Training figures were not computed"), "the HTML report keeps its figures");
+        assertTrue(page.contains("<svg"), "with its charts");
+    }
+
+    @Test
     void aBaselineHoldsTodaysFindingsSoOnlyNewOnesFail() throws IOException {
         Path block = write("programmes/block.yaml", PROGRAMME);
         write(".mesolint.yaml", "fail-on: info\nbaseline: .mesolint-baseline.json\n");

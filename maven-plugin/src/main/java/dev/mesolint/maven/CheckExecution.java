@@ -1,5 +1,6 @@
 package dev.mesolint.maven;
 
+import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.config.ConfigProblem;
@@ -53,7 +54,7 @@ final class CheckExecution {
         }
         try {
             // After the cache: it keeps the findings themselves, so editing the baseline never invalidates it.
-            RunReport compared = prepared.workspace().applyBaseline(outcome.report());
+            RunReport compared = Baseline.applyConfigured(prepared.workspace(), outcome.report());
             return new CachedCheck.Outcome(compared, outcome.reused(), outcome.checked(), outcome.unreadable());
         } catch (ConfigProblem e) {
             throw RunSettings.problem(e);

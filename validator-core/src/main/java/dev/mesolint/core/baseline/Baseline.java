@@ -3,7 +3,9 @@ package dev.mesolint.core.baseline;
 import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.FileReport;
+import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.FrameworkRules;
@@ -165,6 +167,18 @@ public final class Baseline {
                 + e.programme().replaceFirst("^(id|file):", "") + (e.anchor().isEmpty() ? "" : " at " + e.anchor())
                 + " matches no finding (fixed, or the programme's id changed)",
                 "regenerate the baseline with 'mesolint baseline', or delete the entry", Optional.empty());
+    }
+
+    /**
+     * {@code report} compared with the workspace's baseline file, when there is one (the option's, else the
+     * configuration's): the findings it holds are marked baselined and no longer count. Without one, {@code report}.
+     */
+    public static RunReport applyConfigured(Workspace workspace, RunReport report) throws ConfigProblem {
+        Optional<Path> file = workspace.baselineFile();
+        if (file.isEmpty()) {
+            return report;
+        }
+        return read(file.get(), ProgrammeFiles.display(workspace.root(), file.get())).apply(report);
     }
 
     /** Writes the baseline as JSON, sorted, so that a regenerated baseline diffs cleanly. */

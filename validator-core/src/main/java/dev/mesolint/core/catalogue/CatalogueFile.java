@@ -1,6 +1,6 @@
 package dev.mesolint.core.catalogue;
 
-import dev.mesolint.core.format.Violation;
+import dev.mesolint.core.source.Violation;
 import java.util.List;
 
 /** The entries of one catalogue file, or why it could not be read. */

@@ -3,20 +3,18 @@ package dev.mesolint.core.engine;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.CatalogueFile;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.format.CatalogueReader;
 import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.format.ProgrammeBinder;
-import dev.mesolint.core.format.Violation;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.rules.InternalErrorRule;
-import dev.mesolint.core.rules.SchemaRule;
-import dev.mesolint.core.rules.YamlSyntaxRule;
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.YamlProblem;
@@ -108,7 +106,7 @@ public final class Checker {
                     report.timing().perRule()));
         } catch (RuntimeException | StackOverflowError e) {
             String cause = e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
-            return violationReport(shown, null, InternalErrorRule.ID, List.of(new Violation(Location.START,
+            return violationReport(shown, null, FrameworkRules.INTERNAL_ERROR, List.of(new Violation(Location.START,
                     "mesolint failed while checking this file (" + cause + ")",
                     "please report this with the file attached; the other files were checked")));
         }
@@ -125,20 +123,20 @@ public final class Checker {
         try {
             document = source.read();
         } catch (YamlProblem e) {
-            return violationReport(shown, null, YamlSyntaxRule.ID,
+            return violationReport(shown, null, FrameworkRules.YAML_SYNTAX,
                     List.of(new Violation(e.location(), e.getMessage(), e.hint())));
         } catch (IOException e) {
-            return violationReport(shown, null, YamlSyntaxRule.ID,
+            return violationReport(shown, null, FrameworkRules.YAML_SYNTAX,
                     List.of(new Violation(Location.START, "cannot read the file: " + e.getMessage(),
                             "check that the file exists and is readable")));
         }
         List<Violation> violations = programmeSchema.validate(document);
         if (!violations.isEmpty()) {
-            return violationReport(shown, null, SchemaRule.ID, violations);
+            return violationReport(shown, null, FrameworkRules.SCHEMA, violations);
         }
         ProgrammeBinder.Result bound = new ProgrammeBinder().bind(document);
         if (bound.programme().isEmpty()) {
-            return violationReport(shown, null, SchemaRule.ID, bound.violations());
+            return violationReport(shown, null, FrameworkRules.SCHEMA, bound.violations());
         }
         Programme programme = bound.programme().get();
         String profile = request.configuration().profileFor(shown, programme);

@@ -1,5 +1,7 @@
 package dev.mesolint.core.engine;
 
+import dev.mesolint.core.config.ConfigDocument;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.Located;
 import dev.mesolint.core.programme.Waiver;
@@ -7,10 +9,10 @@ import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.rules.UnusedWaiverRule;
 import java.util.Collections;
 import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.stream.Stream;
 
@@ -25,7 +27,8 @@ final class WaiverAudit {
     }
 
     void report(FileScope scope) {
-        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(UnusedWaiverRule.ID)).findFirst().orElse(null);
+        RuleDefinition audit = rules.stream().filter(r -> r.id().equals(FrameworkRules.UNUSED_WAIVER)).findFirst()
+                .orElse(null);
         if (audit == null) {
             return;
         }
@@ -40,15 +43,21 @@ final class WaiverAudit {
             }
             RuleDefinition named = rules.stream().filter(r -> r.id().equals(w.ruleId())).findFirst().orElse(null);
             String why;
+            String fix = "remove the waiver, or correct the rule id (see 'mesolint rules')";
             if (named == null) {
                 why = "names no known rule";
+                Optional<String> near = ConfigDocument.closest(w.ruleId(), rules.stream().map(RuleDefinition::id)
+                        .toList());
+                if (near.isPresent()) {
+                    fix = "did you mean '" + near.get() + "'? correct the rule id, or remove the waiver";
+                }
             } else if (configuration.settingsFor(scope.profileName(), named).severity() == Severity.OFF) {
                 why = "names " + w.ruleId() + ", which is off in the " + scope.profileName() + " profile";
             } else {
                 why = "accepted no " + w.ruleId() + " finding";
             }
             context.report(w.location(), List.of(), "waiver for '" + w.ruleId() + "' " + why + " (reason given: "
-                    + w.reason() + ")", "remove the waiver, or correct the rule id (see 'mesolint rules')");
+                    + w.reason() + ")", fix);
         }
     }
 

@@ -1,6 +1,5 @@
 package dev.mesolint.core.engine;
 
-import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.FolderRule;
 import dev.mesolint.core.config.ProfileRef;
@@ -111,18 +110,6 @@ public final class Workspace {
     /** The baseline file to compare with: the option, else the configuration's. */
     public Optional<Path> baselineFile() {
         return options.baseline().or(config::baseline);
-    }
-
-    /**
-     * {@code report} compared with the baseline file, when there is one (the option's, else the configuration's):
-     * the findings it holds are marked baselined and no longer count. Without a baseline file, {@code report}.
-     */
-    public RunReport applyBaseline(RunReport report) throws ConfigProblem {
-        Optional<Path> file = baselineFile();
-        if (file.isEmpty()) {
-            return report;
-        }
-        return Baseline.read(file.get(), ProgrammeFiles.display(root(), file.get())).apply(report);
     }
 
     public RepositoryConfig config() {

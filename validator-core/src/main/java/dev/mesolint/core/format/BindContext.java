@@ -1,6 +1,7 @@
 package dev.mesolint.core.format;
 
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;

@@ -3,8 +3,8 @@ package dev.mesolint.core.format;
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.CatalogueFile;
 import dev.mesolint.core.catalogue.Exercise;
-import dev.mesolint.core.rules.SchemaRule;
-import dev.mesolint.core.rules.YamlSyntaxRule;
+import dev.mesolint.core.finding.FrameworkRules;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.YamlProblem;
@@ -52,18 +52,18 @@ public final class CatalogueReader {
             return read(reader.read(path), displayPath);
         } catch (YamlProblem e) {
             return new CatalogueFile(displayPath, List.of(), List.of(new Violation(e.location(), e.getMessage(),
-                    e.hint())), YamlSyntaxRule.ID);
+                    e.hint())), FrameworkRules.YAML_SYNTAX);
         } catch (IOException e) {
             return new CatalogueFile(displayPath, List.of(), List.of(new Violation(
                     dev.mesolint.core.source.Location.START, "cannot read the catalogue file: " + e.getMessage(),
-                    "check the path in the configuration")), YamlSyntaxRule.ID);
+                    "check the path in the configuration")), FrameworkRules.YAML_SYNTAX);
         }
     }
 
     private CatalogueFile read(LocatedDocument document, String displayPath) {
         List<Violation> violations = new ArrayList<>(schema.validate(document));
         if (!violations.isEmpty()) {
-            return new CatalogueFile(displayPath, List.of(), violations, SchemaRule.ID);
+            return new CatalogueFile(displayPath, List.of(), violations, FrameworkRules.SCHEMA);
         }
         BindContext ctx = new BindContext(document);
         List<Exercise> entries = CatalogueEntryBinder.readAll(ctx, document.root().get("exercises"), "/exercises",
@@ -80,6 +80,6 @@ public final class CatalogueReader {
                         "give the main muscle credit 1; synergists get 0.5"));
             }
         }
-        return new CatalogueFile(displayPath, violations.isEmpty() ? entries : List.of(), violations, SchemaRule.ID);
+        return new CatalogueFile(displayPath, violations.isEmpty() ? entries : List.of(), violations, FrameworkRules.SCHEMA);
     }
 }

@@ -3,6 +3,7 @@ package dev.mesolint.core.format;
 import com.networknt.schema.Schema;
 import com.networknt.schema.SchemaRegistry;
 import com.networknt.schema.SpecificationVersion;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
 import java.io.IOException;

@@ -9,6 +9,7 @@ import dev.mesolint.core.programme.Level;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.ProgrammeInfo;
 import dev.mesolint.core.programme.Waiver;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.LoadUnit;

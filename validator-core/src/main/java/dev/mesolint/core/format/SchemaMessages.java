@@ -1,6 +1,7 @@
 package dev.mesolint.core.format;
 
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.value.Durations;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.RepTarget;

@@ -6,8 +6,7 @@ import dev.mesolint.core.engine.RuleConfiguration;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
-import dev.mesolint.core.rules.WeeklyVolumeMaxRule;
-import dev.mesolint.core.rules.WeeklyVolumeMinRule;
+import dev.mesolint.core.rule.WeeklyVolumeLimit;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
@@ -39,19 +38,18 @@ public final class ModelFigures implements ReportFigures {
      */
     public static ModelFigures underProfiles(RuleConfiguration configuration,
             List<? extends RuleDefinition> rules) {
-        RuleDefinition min = rules.stream().filter(r -> r.id().equals(WeeklyVolumeMinRule.ID)).findFirst().orElse(null);
-        RuleDefinition max = rules.stream().filter(r -> r.id().equals(WeeklyVolumeMaxRule.ID)).findFirst().orElse(null);
+        List<? extends RuleDefinition> limits = rules.stream().filter(r -> r instanceof WeeklyVolumeLimit).toList();
         return new ModelFigures((profile, muscleName) -> {
             Muscle muscle = dev.mesolint.core.catalogue.Named.byYamlName(Muscle.class, muscleName).orElseThrow();
             double floor = 0;
             double cap = Double.MAX_VALUE;
-            if (min != null) {
-                RuleSettings s = configuration.settingsFor(profile, min);
-                floor = s.severity() == Severity.OFF ? 0 : WeeklyVolumeMinRule.floor(s);
-            }
-            if (max != null) {
-                RuleSettings s = configuration.settingsFor(profile, max);
-                cap = s.severity() == Severity.OFF ? Double.MAX_VALUE : WeeklyVolumeMaxRule.cap(s, muscle);
+            for (RuleDefinition rule : limits) {
+                RuleSettings s = configuration.settingsFor(profile, rule);
+                if (s.severity() != Severity.OFF) {
+                    WeeklyVolumeLimit limit = (WeeklyVolumeLimit) rule;
+                    floor = Math.max(floor, limit.weeklyFloor(s, muscle).orElse(0));
+                    cap = Math.min(cap, limit.weeklyCap(s, muscle).orElse(Double.MAX_VALUE));
+                }
             }
             return cap == Double.MAX_VALUE ? new VolumeBounds(floor, Math.max(floor, VolumeBounds.DEFAULTS.cap()))
                     : new VolumeBounds(floor, cap);

@@ -3,11 +3,11 @@ package dev.mesolint.core.report;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
-import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.IOException;
 import java.io.Writer;
 import java.net.URI;
@@ -150,7 +150,7 @@ public final class SarifReport implements ReportWriter {
 
     private static ObjectNode invocation(ReportInput input) {
         ObjectNode invocation = JsonText.object();
-        boolean internal = input.run().active().stream().anyMatch(f -> f.ruleId().equals(InternalErrorRule.ID));
+        boolean internal = input.run().active().stream().anyMatch(f -> f.ruleId().equals(FrameworkRules.INTERNAL_ERROR));
         invocation.put("executionSuccessful", !internal && input.run().missing().isEmpty());
         if (!input.run().missing().isEmpty()) {
             ArrayNode notes = invocation.putArray("toolExecutionNotifications");

@@ -30,7 +30,7 @@ public final class EffortConflictRule implements Rule {
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "The efforts a set states agree: its load allows the prescribed reps (error if not), and does not leave "
                     + "far more in reserve than stated; RIR and RPE agree.",
-            Severity.WARNING, RuleMetadata.Category.EFFORT, List.of(),
+            Severity.WARNING, RuleMetadata.Category.EFFORT, StrengthSets.parameters(),
             "A set that gives both a load and a reserve says the same thing twice, and the two must fit the "
                     + "published relation between %1RM and reps to failure (NSCA Table 17.7; Brzycki by default). A "
                     + "load that allows fewer reps than prescribed cannot be done as written and is always an error, "
@@ -39,7 +39,12 @@ public final class EffortConflictRule implements Rule {
                     + "not the reserve, and RIR and RPE that disagree are reported at the rule's severity (warning). "
                     + "Reps at a given %1RM vary between people and exercises, and reserve estimates err by more than "
                     + "two reps far from failure, so the model's tolerance (effortToleranceReps, 2 reps) is allowed "
-                    + "first.",
+                    + "first. Ballistic and Olympic lifts are not read through the %1RM relation at all (a set of "
+                    + "cleans ends at a technical miss, not at muscular failure); only their RIR and RPE are "
+                    + "compared. Under the strength and general-fitness profiles, a strength-purpose set (at most 6 "
+                    + "reps at 70% of 1RM or more) that leaves more in reserve than stated is not called "
+                    + "mislabelled: heavy low-rep sets stay far from failure on purpose, and the stated reserve "
+                    + "there is a ceiling on effort, not a target.",
             "Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7; Brzycki 1993; Zourdos et al. 2016, "
                     + "JSCR 30(1):267-275; Hackett et al. 2017, JSCR 31:2162-2168");
 
@@ -55,7 +60,7 @@ public final class EffortConflictRule implements Rule {
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
-                    if (!set.agreement().isConflict()) {
+                    if (!set.agreement().isConflict() || notJudged(context, set)) {
                         continue;
                     }
                     String key = set.agreement().status() == AgreementStatus.RIR_RPE_DIFFER ? "rpe" : "load";
@@ -73,6 +78,18 @@ public final class EffortConflictRule implements Rule {
             group.add(found, severity, group.label() + ": " + problem(set, relation), fix(set, relation));
         }
         found.report(context);
+    }
+
+    /** Ballistic lifts: only RIR against RPE; strength-purpose sets where the profile says so: no mislabel. */
+    private static boolean notJudged(RuleContext context, SetMetrics set) {
+        AgreementStatus status = set.agreement().status();
+        if (status == AgreementStatus.RIR_RPE_DIFFER) {
+            return false;
+        }
+        if (StrengthSets.ballistic(context, set.exerciseId())) {
+            return true;
+        }
+        return status == AgreementStatus.MISLABELLED && StrengthSets.notJudged(context, set);
     }
 
     private static String problem(SetMetrics set, OneRepMaxRelation relation) {

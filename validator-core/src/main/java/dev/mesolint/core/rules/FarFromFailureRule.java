@@ -20,17 +20,27 @@ public final class FarFromFailureRule implements Rule {
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "Working sets that stop 5 or more reps short of failure give next to no stimulus.", Severity.WARNING,
             RuleMetadata.Category.EFFORT,
-            List.of(RuleParameter.number(MIN_RIR, 5, 3, 10,
-                    "Reps in reserve from which a working set is reported (the model's reserve: a range counts "
-                            + "at its midpoint, a load alone gives reps to failure minus reps).")),
+            parameters(),
             "Growth comes mostly from the last reps before failure, when every motor unit is working and the bar "
-                    + "slows. Meta-analyses of proximity to failure find that sets ending within a few reps of "
-                    + "failure give clearly more growth than sets ending far from it, and the model gives a set five "
-                    + "or more reps short no stimulating reps at all. Such sets still cost time and some fatigue. "
-                    + "Deload weeks are not checked: easy sets are their point. Reserve estimates err by more than "
-                    + "two reps far from failure, so a set written this far out may be easier still.",
+                    + "slows. The proximity-to-failure meta-regression finds growth falling as reps in reserve rise, "
+                    + "still positive but small far from failure, and the model gives a set five or more reps short "
+                    + "only a small, falling share of a hard set's stimulus. Such sets still cost time and some "
+                    + "fatigue. Deload weeks are not checked: easy sets are their point. Reserve estimates err by "
+                    + "more than two reps far from failure, so a set written this far out may be easier still. "
+                    + StrengthSets.RATIONALE,
             "Refalo et al. 2023, Sports Med 53(3):649-665; Robinson et al. 2024, Sports Med 54:2209-2231; Hackett et "
-                    + "al. 2017, JSCR 31:2162-2168");
+                    + "al. 2017, JSCR 31:2162-2168; strength-purpose sets: Haff & Triplett 2016, NSCA Essentials 4th "
+                    + "ed., Ch. 17, Table 17.8 (strength: 6 reps or fewer), ACSM 2009 position stand (Ratamess et al., "
+                    + "MSSE 41(3):687-708)");
+
+    private static List<RuleParameter> parameters() {
+        List<RuleParameter> all = new java.util.ArrayList<>();
+        all.add(RuleParameter.number(MIN_RIR, 5, 3, 10,
+                "Reps in reserve from which a working set is reported (the model's reserve: a range counts "
+                        + "at its midpoint, a load alone gives reps to failure minus reps)."));
+        all.addAll(StrengthSets.parameters());
+        return List.copyOf(all);
+    }
 
     @Override
     public RuleMetadata metadata() {
@@ -47,7 +57,8 @@ public final class FarFromFailureRule implements Rule {
             }
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
-                    if (set.effortKnown() && set.rir().getAsDouble() >= minRir) {
+                    if (set.effortKnown() && set.rir().getAsDouble() >= minRir
+                            && !StrengthSets.notJudged(context, set)) {
                         groups.add(week, session, set, EffortText.effortLocation(context, set),
                                 EffortText.prescription(set.prescription()), set);
                     }

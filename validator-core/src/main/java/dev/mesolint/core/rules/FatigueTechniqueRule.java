@@ -3,35 +3,57 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.SessionMetrics;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.ExerciseWork;
-import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Technique;
 import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
+import dev.mesolint.core.rule.RuleParameter;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
-/** Drop sets, rest-pause sets, and supersets whose items share a prime mover. */
+/**
+ * Drop sets and rest-pause sets that more work for the same muscle follows, and supersets in which an item is done
+ * right after one that shares its prime mover.
+ */
 public final class FatigueTechniqueRule implements Rule {
     public static final String ID = "fatigue-technique";
+    static final String MAX_RECRUITMENT = "max-next-recruitment";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Drop sets, rest-pause sets, and supersets whose items share a prime mover.", Severity.WARNING,
-            RuleMetadata.Category.FATIGUE, List.of(),
-            "A drop set or rest-pause set carries a set on past failure; a superset of two exercises for the same "
-                    + "prime mover starts the second one with that muscle already tired. Each adds fatigue and "
-                    + "recovery cost, while going to or past failure adds little or no measurable growth over "
-                    + "stopping a rep or two short. They save time, which can be the point: then waive the finding "
-                    + "with that reason. Supersets of exercises for different muscles (a push with a pull) are "
-                    + "not reported.",
-            "Refalo et al. 2023 (Sports Med 53(3):649-665): training to failure gave at most a small extra "
-                    + "hypertrophy over non-failure training; sharing a prime mover in a superset: common practice");
+            "Drop sets and rest-pause sets that more sets for the same muscle follow in the session, and supersets "
+                    + "in which an item comes right after one with the same prime mover.", Severity.WARNING,
+            RuleMetadata.Category.FATIGUE,
+            List.of(RuleParameter.percent(MAX_RECRUITMENT, 0.90, 0.5, 1.0,
+                    "A technique set is reported when the next set for its muscle starts below this share of a "
+                            + "fresh set's recruitment (the model's figure); a longer rest before it, or fewer sets "
+                            + "after it, lets more of the fatigue clear.")),
+            "A drop set or rest-pause set carries a set on past failure with short mini-sets. As a way to grow "
+                    + "muscle it works: one set with drops grew the triceps at least as much as three straight sets "
+                    + "(Fink et al. 2018), and the meta-analysis of Coleman et al. (2022) finds drop sets about as "
+                    + "good as traditional sets for growth, in less time. The model credits them that way. Their "
+                    + "cost is fatigue: the mini-sets are done with almost no recovery and leave more of it, so the "
+                    + "sets that follow for the same muscle start with fewer motor units in reach and give less. "
+                    + "The rule therefore reports a technique only when more sets for its muscle (the prime mover of "
+                    + "the set, credited by a later exercise) follow in the session and the next of them starts "
+                    + "below 90% of a fresh set's recruitment in the model, and names that set and the figure; on "
+                    + "the last set for a muscle, or with enough rest after it, it is not reported. Likewise an item of a superset or circuit done right after an item with the same "
+                    + "prime mover starts with that muscle already tired; items further apart in the circuit, and "
+                    + "pairs for different muscles (a push with a pull), are not reported. When saving time is the "
+                    + "point, waive the finding with that reason.",
+            "Fink et al. 2018 (J Sports Med Phys Fitness 58(5):597-605): one 12RM set with drops vs 3 x 12RM; "
+                    + "Coleman et al. 2022 (Int J Strength Cond 2(1), meta-analysis): drop sets vs traditional sets "
+                    + "for hypertrophy; the fatigue they add to later sets: the "
+                    + "model's techniqueFatigueFactor (docs/model.md); sharing a prime mover in a superset: "
+                    + "common practice");
 
     @Override
     public RuleMetadata metadata() {
@@ -41,14 +63,8 @@ public final class FatigueTechniqueRule implements Rule {
     @Override
     public void check(RuleContext context) {
         Occurrences found = new Occurrences();
+        reportTechniques(context, found);
         ExerciseVisits.each(context.programme(), (week, session, work, superset) -> {
-            for (SetPrescription set : work.sets()) {
-                set.technique().ifPresent(t -> found.add(week, session, work.exerciseId(),
-                        context.fieldLocation(set, "technique"), set.waivers(),
-                        new Occurrences.Step(superset == null ? "set" : "round", Integer.toString(set.number())),
-                        describe(t, context.profileName()), "remove technique: " + t.yamlName()
-                                + "; if more volume is wanted, add one straight set at the same effort"));
-            }
             if (superset != null) {
                 sharedPrimeMover(context, superset, work).ifPresent(detail -> found.add(week, session,
                         work.exerciseId(), work.exerciseLocation(), work.waivers(), Occurrences.Step.NONE, detail,
@@ -59,30 +75,72 @@ public final class FatigueTechniqueRule implements Rule {
         found.report(context);
     }
 
-    private static String describe(Technique t, String profile) {
-        String what = t == Technique.DROP_SET
-                ? "drop set: more reps past failure at a lighter load"
-                : "rest-pause: mini-sets after short pauses at failure";
-        return what + " add fatigue for little extra stimulus; the " + profile + " profile reports fatigue techniques";
+    /** A technique set and the next set that its muscle does after it in the session. */
+    private record Followed(Technique technique, Muscle muscle, SetMetrics next) {
     }
 
-    /** Describes the earlier item that {@code item} shares a prime mover with, if any. */
-    private static Optional<String> sharedPrimeMover(RuleContext context, Superset superset, ExerciseWork item) {
-        Set<Muscle> mine = primeMovers(context, item);
-        for (ExerciseWork earlier : superset.items()) {
-            if (earlier == item) {
-                return Optional.empty();
-            }
-            Set<Muscle> shared = primeMovers(context, earlier);
-            shared.retainAll(mine);
-            if (!shared.isEmpty()) {
-                return Optional.of("done right after " + earlier.exerciseId() + " in a superset, and both have "
-                        + String.join(" and ", shared.stream().map(Muscle::yamlName).toList()) + " as prime mover: "
-                        + "each set starts with that muscle already tired, adding fatigue for less stimulus; the "
-                        + context.profileName() + " profile reports such pairs");
+    private static void reportTechniques(RuleContext context, Occurrences found) {
+        Occurrences.SetHits<Followed> groups = new Occurrences.SetHits<>();
+        for (WeekMetrics week : context.metrics().weeks()) {
+            for (SessionMetrics session : week.sessions()) {
+                List<SetMetrics> sets = session.sets();
+                for (int i = 0; i < sets.size(); i++) {
+                    SetMetrics set = sets.get(i);
+                    if (set.prescription().technique().isEmpty() || set.primeMover().isEmpty()) {
+                        continue;
+                    }
+                    Muscle muscle = set.primeMover().get();
+                    Optional<SetMetrics> next = nextFor(context, sets.subList(i + 1, sets.size()), muscle);
+                    if (next.isPresent() && next.get().recruitment() < context.param(MAX_RECRUITMENT)) {
+                        Technique t = set.prescription().technique().get();
+                        groups.add(week, session, set, context.fieldLocation(set.prescription(), "technique"),
+                                List.of(t, next.get().exerciseId(), next.get().setNumber(),
+                                        Texts.percent(next.get().recruitment())),
+                                new Followed(t, muscle, next.get()));
+                    }
+                }
             }
         }
-        return Optional.empty();
+        for (Occurrences.Group<Followed> group : groups.groups()) {
+            Followed f = group.values().get(0);
+            String muscle = Texts.muscle(f.muscle());
+            String what = f.technique() == Technique.DROP_SET ? "drop set" : "rest-pause";
+            group.add(found, context.severity(), group.label() + ": " + what + ": its mini-sets to failure grow "
+                    + "muscle about as well as more straight sets, in less time, but leave extra fatigue: the next "
+                    + muscle + " set (" + f.next().exerciseId() + " set " + f.next().setNumber() + ") starts at "
+                    + Texts.percent(f.next().recruitment()) + " of a fresh set's recruitment; the "
+                    + context.profileName() + " profile reports techniques whose next " + muscle
+                    + " set starts under " + context.shown(MAX_RECRUITMENT),
+                    "put the " + what + " on the last " + muscle + " set of the session, rest longer after it, "
+                            + "or remove technique: " + f.technique().yamlName());
+        }
+    }
+
+    /** The first of {@code later} whose exercise credits {@code muscle}. */
+    private static Optional<SetMetrics> nextFor(RuleContext context, List<SetMetrics> later, Muscle muscle) {
+        return later.stream().filter(s -> context.exercise(s.exerciseId()).map(e -> e.credit(muscle) > 0)
+                .orElse(false)).findFirst();
+    }
+
+    /**
+     * Describes the item done right before {@code item} in the superset's round when the two share a prime mover.
+     * Only that neighbour counts: in a circuit, a station two places back has had a station's time to recover.
+     */
+    private static Optional<String> sharedPrimeMover(RuleContext context, Superset superset, ExerciseWork item) {
+        int at = superset.items().indexOf(item);
+        if (at <= 0) {
+            return Optional.empty();
+        }
+        ExerciseWork before = superset.items().get(at - 1);
+        Set<Muscle> shared = primeMovers(context, before);
+        shared.retainAll(primeMovers(context, item));
+        if (shared.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of("done right after " + before.exerciseId() + " in a superset, and both have "
+                + String.join(" and ", shared.stream().map(Muscle::yamlName).toList()) + " as prime mover: "
+                + "each set starts with that muscle already tired, adding fatigue for less stimulus; the "
+                + context.profileName() + " profile reports such pairs");
     }
 
     private static Set<Muscle> primeMovers(RuleContext context, ExerciseWork work) {

@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -7,7 +8,7 @@ import java.util.List;
 
 /** Reports a file that mesolint itself failed on, so that one file never stops a run and no stack trace leaks. */
 public final class InternalErrorRule implements RuleDefinition {
-    public static final String ID = "internal-error";
+    public static final String ID = FrameworkRules.INTERNAL_ERROR;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "mesolint could not finish checking the file (a defect in mesolint, not in the programme).",

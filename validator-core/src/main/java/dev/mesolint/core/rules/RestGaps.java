@@ -18,7 +18,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.function.Function;
+import java.util.function.BiFunction;
 
 /**
  * The rests of a session that more work follows, and the check the two rest rules share.
@@ -41,14 +41,17 @@ final class RestGaps {
     record Limit(String parameter, String after) {
     }
 
-    /** Reports every rest shorter than {@code limitFor} asks; exercises it maps to null are not this rule's. */
-    static void check(RuleContext context, Function<Exercise, Limit> limitFor) {
+    /**
+     * Reports every rest shorter than {@code limitFor} asks of an entry and its exercise; entries it maps to null are
+     * not this rule's.
+     */
+    static void check(RuleContext context, BiFunction<ExerciseWork, Exercise, Limit> limitFor) {
         Occurrences found = new Occurrences();
         for (Week week : context.programme().weeks()) {
             for (Session session : week.sessions()) {
                 for (Gap gap : of(session, context)) {
                     Optional<Exercise> exercise = context.exercise(gap.work().exerciseId());
-                    Limit limit = exercise.map(limitFor).orElse(null);
+                    Limit limit = exercise.map(e -> limitFor.apply(gap.work(), e)).orElse(null);
                     if (limit == null || gap.rest().isEmpty()) {
                         continue;
                     }

@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -7,7 +8,7 @@ import java.util.List;
 
 /** The file follows the programme format: the published JSON Schema, then value checks the schema cannot express. */
 public final class SchemaRule implements RuleDefinition {
-    public static final String ID = "schema";
+    public static final String ID = FrameworkRules.SCHEMA;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "The file follows the programme format (keys, types, allowed values and value forms).", Severity.ERROR,

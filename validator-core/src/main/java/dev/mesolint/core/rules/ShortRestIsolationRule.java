@@ -32,6 +32,6 @@ public final class ShortRestIsolationRule implements Rule {
 
     @Override
     public void check(RuleContext context) {
-        RestGaps.check(context, e -> e.isCompound() ? null : new RestGaps.Limit(MIN_REST, "isolation sets"));
+        RestGaps.check(context, (work, e) -> e.isCompound() ? null : new RestGaps.Limit(MIN_REST, "isolation sets"));
     }
 }

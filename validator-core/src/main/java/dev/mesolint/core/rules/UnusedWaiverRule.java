@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -7,7 +8,7 @@ import java.util.List;
 
 /** A waiver that accepts no finding: stale after an edit, misspelt, or for a rule that is off. */
 public final class UnusedWaiverRule implements RuleDefinition {
-    public static final String ID = "unused-waiver";
+    public static final String ID = FrameworkRules.UNUSED_WAIVER;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "Every waiver accepts at least one finding of the rule it names.", Severity.WARNING,

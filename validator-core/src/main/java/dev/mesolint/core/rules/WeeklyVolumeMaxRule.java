@@ -11,13 +11,16 @@ import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
+import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rule.WeeklyVolumeLimit;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.Set;
 
 /** A muscle gets more hard sets in a week than it can recover from and grow on. */
-public final class WeeklyVolumeMaxRule implements Rule {
+public final class WeeklyVolumeMaxRule implements Rule, WeeklyVolumeLimit {
     public static final String ID = "weekly-volume-max";
     static final String MAX_SETS = "max-sets";
     static final String MAX_SETS_COMPETITION = "max-sets-competition-lifts";
@@ -50,8 +53,13 @@ public final class WeeklyVolumeMaxRule implements Rule {
                     + "dose-response literature");
 
     /** The weekly cap for {@code muscle} under {@code settings}: the competition lifts' prime movers have their own. */
-    public static double cap(dev.mesolint.core.rule.RuleSettings settings, Muscle muscle) {
+    public static double cap(RuleSettings settings, Muscle muscle) {
         return settings.value(COMPETITION_PRIME_MOVERS.contains(muscle) ? MAX_SETS_COMPETITION : MAX_SETS);
+    }
+
+    @Override
+    public OptionalDouble weeklyCap(RuleSettings settings, Muscle muscle) {
+        return OptionalDouble.of(cap(settings, muscle));
     }
 
     @Override

@@ -10,11 +10,14 @@ import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
+import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rule.WeeklyVolumeLimit;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 
 /** A muscle the programme trains directly gets too few hard sets in a week to be worth its time. */
-public final class WeeklyVolumeMinRule implements Rule {
+public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     public static final String ID = "weekly-volume-min";
     static final String MIN_SETS = "min-sets";
 
@@ -35,8 +38,13 @@ public final class WeeklyVolumeMinRule implements Rule {
                     + "drawn from that dose-response literature");
 
     /** The weekly floor under {@code settings}. */
-    public static double floor(dev.mesolint.core.rule.RuleSettings settings) {
+    public static double floor(RuleSettings settings) {
         return settings.value(MIN_SETS);
+    }
+
+    @Override
+    public OptionalDouble weeklyFloor(RuleSettings settings, Muscle muscle) {
+        return OptionalDouble.of(floor(settings));
     }
 
     @Override

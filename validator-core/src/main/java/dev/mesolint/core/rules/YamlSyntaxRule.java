@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleMetadata;
@@ -7,7 +8,7 @@ import java.util.List;
 
 /** The file is well-formed YAML, within the safety limits. Reported by the loader, before any other rule. */
 public final class YamlSyntaxRule implements RuleDefinition {
-    public static final String ID = "yaml-syntax";
+    public static final String ID = FrameworkRules.YAML_SYNTAX;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "The file is well-formed YAML text, within the size, alias and nesting limits.", Severity.ERROR,

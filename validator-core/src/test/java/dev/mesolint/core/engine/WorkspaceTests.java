@@ -100,6 +100,7 @@ class WorkspaceTests {
                     pattern: squat
                     stability: stable
                     skill: low
+                    role: main
                     muscles: {quadriceps: 1, glutes: 0.5}
                     regions: [knee, hip, ankle]
                 """);

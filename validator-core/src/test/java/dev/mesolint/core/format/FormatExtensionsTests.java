@@ -10,6 +10,7 @@ import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Week;
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.testing.Programmes;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.value.LoadUnit;

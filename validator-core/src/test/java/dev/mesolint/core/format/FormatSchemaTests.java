@@ -3,6 +3,7 @@ package dev.mesolint.core.format;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.testing.Programmes;
 import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.YamlLimits;

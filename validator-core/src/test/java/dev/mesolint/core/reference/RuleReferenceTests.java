@@ -86,9 +86,9 @@ class RuleReferenceTests {
             }
         }
         String restPage = pages.get("short-rest-compound.md");
-        assertTrue(restPage.contains("| strength | warning | 2min | 3min |"), restPage);
-        assertTrue(restPage.contains("| `min-rest-squat-hinge` | Shortest rest after a compound set of the squat or "
-                + "hinge pattern. | 2min | 30s to 10min |"), restPage);
+        assertTrue(restPage.contains("| strength | warning | 2min | 3min | 1min |"), restPage);
+        assertTrue(restPage.contains("| `min-rest-assistance` | Shortest rest after a compound set of assistance "
+                + "work (role: assistance, written or the catalogue's default). | 2min | 30s to 10min |"), restPage);
         assertTrue(restPage.contains("mesolint reports:\n\n```text\nshort-rest-compound/failing.yaml:18:19: warning "
                 + "short-rest-compound: barbell-back-squat"), restPage);
         assertTrue(pages.get("README.md").contains("| [unstable-surface](unstable-surface.md) | effort | warning | "
