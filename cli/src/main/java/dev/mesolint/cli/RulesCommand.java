@@ -7,6 +7,7 @@ import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.profile.ResolvedProfile;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
+import dev.mesolint.core.rule.Thresholds;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Optional;
@@ -18,7 +19,8 @@ import picocli.CommandLine.Mixin;
 /** {@code mesolint rules}: the rules with their severity in a profile. */
 @Command(name = "rules", mixinStandardHelpOptions = true,
         description = {"Lists every rule with its severity in a profile (off = not checked) and what it checks.",
-            "The profile is --profile, else the configuration's default profile, else hypertrophy.",
+            "The profile is --profile, else the configuration's default profile, else hypertrophy; each rule with "
+                    + "parameters shows their values in it (and the default where the profile changes one).",
             "See 'mesolint explain RULE-ID' for a rule's parameters, rationale and examples."},
         footer = {"", ConfigOptions.PRECEDENCE, "", "Caution: " + Mesolint.CAUTION})
 final class RulesCommand implements Callable<Integer> {
@@ -46,6 +48,10 @@ final class RulesCommand implements Callable<Integer> {
                 RuleSettings s = profile.settings(rule);
                 String pack = installed.pack(rule.id()).map(p -> " [rule pack " + p + "]").orElse("");
                 out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(), rule.metadata().summary(), pack);
+                String thresholds = Thresholds.line(rule.metadata(), s);
+                if (!thresholds.isEmpty()) {
+                    out.printf("%-22s %-8s in this profile: %s%n", "", "", thresholds);
+                }
             }
             out.println();
             out.println("Caution: " + Mesolint.CAUTION);

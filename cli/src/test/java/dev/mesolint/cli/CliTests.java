@@ -207,10 +207,29 @@ class CliTests {
     }
 
     @Test
+    void rulesAndExplainShowATeamProfilesThresholds() throws IOException {
+        write("club.yaml", "profile: club\nextends: strength\nrules:\n  short-rest-compound: {min-rest: 150s}\n");
+        Run rules = run("rules", "--root", rootArg(), "--profile", root.resolve("club.yaml").toString());
+        assertEquals(0, rules.exit(), rules.err());
+        // the strength profile's 3 min after squat and hinge sets: ACSM 2009, 3-5 min for heavy core lifts
+        assertTrue(rules.out().contains("in this profile: min-rest 2.5min (default 2min), min-rest-squat-hinge 3min "
+                + "(default 2min)"), rules.out());
+        Run explain = run("explain", "--root", rootArg(), "--profile", root.resolve("club.yaml").toString(),
+                "short-rest-compound");
+        assertEquals(0, explain.exit(), explain.err());
+        assertTrue(explain.out().startsWith("In the club profile: warning; min-rest 2.5min (default 2min), "
+                + "min-rest-squat-hinge 3min (default 2min)"), explain.out());
+    }
+
+    @Test
     void explainPrintsTheReferencePage() {
-        Run r = run("explain", "short-rest-compound");
+        Run r = run("explain", "--root", rootArg(), "short-rest-compound");
         assertEquals(0, r.exit(), r.err());
-        assertTrue(r.out().startsWith("# short-rest-compound\n"), r.out());
+        // 2 min after compound sets: ACSM 2009 position stand (Ratamess et al.), the hypertrophy profile's default
+        assertTrue(r.out().startsWith("In the hypertrophy profile: warning; min-rest 2min, min-rest-squat-hinge 2min"),
+                r.out());
+        assertTrue(r.out().contains("\n\n# short-rest-compound\n"), r.out());
+        assertFalse(r.out().contains("<!--"), "no note for contributors in a terminal");
         assertTrue(r.out().contains("| strength | warning | 2min | 3min |"), r.out());
         assertTrue(r.out().contains(Mesolint.CAUTION), r.out());
         Run unknown = run("explain", "short-rest");
