@@ -16,7 +16,8 @@ import picocli.CommandLine.Command;
             "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
             "", "Caution: " + Mesolint.CAUTION},
         subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
-            ExplainCommand.class, CatalogueCommand.class, AutoComplete.GenerateCompletion.class,
+            ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
+            AutoComplete.GenerateCompletion.class,
             CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;

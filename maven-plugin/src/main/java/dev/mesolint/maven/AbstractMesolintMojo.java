@@ -55,13 +55,31 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     String profile;
 
     /**
-     * The level at which findings fail the build: {@code error}, {@code warning} or {@code info}. Default: the
-     * configuration file's {@code fail-on}, else {@code error}.
+     * The level at which findings fail the build: {@code error}, {@code warning} or {@code info}, or {@code none}
+     * to log and report every finding without failing the build. Default: the configuration file's
+     * {@code fail-on}, else {@code error}.
      *
      * @since 0.1.0
      */
     @Parameter(property = "mesolint.failOn")
     String failOn;
+
+    /**
+     * Globs of the programme files to check, relative to {@code programmes} (e.g. {@code strength/**}). Default:
+     * every {@code *.yaml} and {@code *.yml} below it.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.includes")
+    List<String> includes = new ArrayList<>();
+
+    /**
+     * Globs of programme files to leave out, relative to {@code programmes} (e.g. {@code drafts/**}). Default: none.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.excludes")
+    List<String> excludes = new ArrayList<>();
 
     /**
      * Extra catalogue files of exercises, added after the configuration file's; entries replace built-in ones by id.
@@ -102,8 +120,8 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
      *
      * @since 0.1.0
      */
-    @Parameter(property = "mesolint.cache", defaultValue = "true")
-    boolean useCache;
+    @Parameter(property = "mesolint.cache", alias = "useCache", defaultValue = "true")
+    boolean cache;
 
     /**
      * Also log the findings that a waiver accepts, with the waiver's reason.
@@ -134,8 +152,10 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         if (useCache() && figures) {
             getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
         }
-        RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile, failOn,
-                catalogues == null ? List.of() : catalogues, baseline).prepare();
+        boolean reportOnly = "none".equalsIgnoreCase(failOn == null ? "" : failOn.trim());
+        RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
+                reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
+                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
         CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
@@ -145,7 +165,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
                     outputDirectory.toPath());
         }
-        afterCheck(outcome);
+        afterCheck(outcome, reportOnly);
     }
 
     /** The report formats this goal writes, as configured. */
@@ -154,8 +174,13 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     /** Whether this goal reads and writes the result cache. */
     abstract boolean useCache();
 
-    /** What the goal does with the result: log it, fail the build, write reports. */
-    abstract void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException, MojoFailureException;
+    /**
+     * What the goal does with the result: log it, fail the build, write reports.
+     *
+     * @param reportOnly {@code failOn} is {@code none}: findings never fail the build
+     */
+    abstract void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException,
+            MojoFailureException;
 
     private List<ReportTarget> reportTargets() throws MojoExecutionException {
         List<ReportTarget> targets = new ArrayList<>();

@@ -37,14 +37,19 @@ public class CheckMojo extends AbstractMesolintMojo {
 
     @Override
     boolean useCache() {
-        return useCache;
+        return cache;
     }
 
     @Override
-    void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException, MojoFailureException {
+    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException,
+            MojoFailureException {
         RunReport run = outcome.report();
         new FindingLog(getLog(), showWaived).write(run);
         CheckExecution.failOnBrokenRun(outcome);
+        if (reportOnly) {
+            getLog().info("mesolint: failOn is none: findings are reported, never a build failure");
+            return;
+        }
         if (run.failed()) {
             throw new MojoFailureException(failureMessage(run));
         }

@@ -41,7 +41,7 @@ public class ReportMojo extends AbstractMesolintMojo {
     }
 
     @Override
-    void afterCheck(CachedCheck.Outcome outcome) throws MojoExecutionException {
+    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException {
         getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
         CheckExecution.failOnBrokenRun(outcome);
     }

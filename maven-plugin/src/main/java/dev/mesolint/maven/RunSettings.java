@@ -6,6 +6,7 @@ import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.config.RepositoryLayout;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.InstalledRules;
+import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.engine.SettingSources;
 import dev.mesolint.core.engine.Workspace;
@@ -13,7 +14,9 @@ import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.io.File;
 import java.io.IOException;
+import java.nio.file.FileSystems;
 import java.nio.file.Path;
+import java.nio.file.PathMatcher;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -25,7 +28,7 @@ import org.apache.maven.plugin.MojoExecutionException;
  * repository configuration and lets the parameters win). Values that are {@code null} were not set.
  */
 record RunSettings(Path projectDir, File programmes, File config, String profile, String failOn, List<File> catalogues,
-        File baseline) {
+        File baseline, List<String> includes, List<String> excludes) {
 
     /** How configuration problems the core reports by command-line option are named for Maven users. */
     private static final Map<String, String> PARAMETERS = Map.of("--config", "config (mesolint.config)",
@@ -59,7 +62,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
         Optional<Severity> level = Optional.empty();
         if (failOn != null) {
             level = Optional.of(Severity.parseFailLevel(failOn).orElseThrow(() -> error("failOn",
-                    "must be error, warning or info, not '" + failOn + "'")));
+                    "must be error, warning, info or none, not '" + failOn + "'")));
         }
         // A profile file named by the parameter is relative to the project folder, like every path in a POM.
         Optional<String> forced = Optional.ofNullable(profile).map(p -> ProfileRef.of(p, projectDir, "profile", null)
@@ -71,7 +74,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
         try {
             List<RuleDefinition> rules = InstalledRules.discover(RunSettings.class.getClassLoader()).rules();
             Workspace workspace = Workspace.open(options, rules);
-            CheckRequest request = workspace.request(List.of(programmes.toPath()));
+            CheckRequest request = workspace.request(selected());
             return new Prepared(workspace, request, rules, ConfigurationKey.of(workspace, request, rules),
                     SettingSources.describe(workspace, name -> "plugin parameter " + name));
         } catch (ConfigProblem e) {
@@ -79,6 +82,40 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot read a configuration file: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * What to check: the programmes folder, or, with includes or excludes, the files below it that the globs
+     * (relative to the folder) let through.
+     */
+    private List<Path> selected() throws MojoExecutionException {
+        if (includes.isEmpty() && excludes.isEmpty() || !programmes.isDirectory()) {
+            return List.of(programmes.toPath());
+        }
+        List<PathMatcher> in = matchers("includes", includes);
+        List<PathMatcher> out = matchers("excludes", excludes);
+        Path folder = programmes.toPath().toAbsolutePath().normalize();
+        List<Path> files = new ArrayList<>();
+        for (Path file : ProgrammeFiles.discover(List.of(folder), new ArrayList<>())) {
+            Path relative = folder.relativize(file);
+            if ((in.isEmpty() || in.stream().anyMatch(m -> m.matches(relative)))
+                    && out.stream().noneMatch(m -> m.matches(relative))) {
+                files.add(file);
+            }
+        }
+        return files;
+    }
+
+    private static List<PathMatcher> matchers(String parameter, List<String> globs) throws MojoExecutionException {
+        List<PathMatcher> matchers = new ArrayList<>();
+        for (String glob : globs) {
+            try {
+                matchers.add(FileSystems.getDefault().getPathMatcher("glob:" + glob.trim()));
+            } catch (IllegalArgumentException e) {
+                throw error(parameter, "'" + glob + "' is not a valid glob; write e.g. strength/** or drafts/*.yaml");
+            }
+        }
+        return matchers;
     }
 
     /** A configuration problem as a build error: {@code mesolint: file:line:column: message (fix: ...)}. */

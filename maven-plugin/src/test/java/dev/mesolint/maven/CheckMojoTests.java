@@ -55,6 +55,35 @@ class CheckMojoTests {
     }
 
     @Test
+    void failOnNoneLogsEveryFindingAndNeverFailsTheBuild() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.failOn = "none";
+
+        mojo.execute();
+
+        assertTrue(repo.log.lines.stream().anyMatch(l -> l.contains("programmes/rehab/misspelt.yaml:15:23: error "
+                + "unknown-exercise")), repo.log.text());
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: failOn is none: findings are reported, never a build "
+                + "failure"), repo.log.text());
+    }
+
+    @Test
+    void includesAndExcludesChooseTheFilesBelowTheProgrammesFolder() throws Exception {
+        MojoFixture repo = repository().programme("drafts/idea.yaml", MojoFixture.PROGRAMME.replace("barbell-bench",
+                "barbel-bench"));
+        CheckMojo onlyGood = repo.check();
+        onlyGood.excludes = List.of("rehab/**", "drafts/**");
+        onlyGood.execute();
+        assertTrue(repo.log.text().contains("mesolint: 1 file checked: 0 errors"), repo.log.text());
+
+        CheckMojo drafts = repo.check();
+        drafts.includes = List.of("drafts/*.yaml");
+        MojoFailureException failure = assertThrows(MojoFailureException.class, drafts::execute);
+        assertTrue(failure.getMessage().contains("in 1 of 1 files"), failure.getMessage());
+    }
+
+    @Test
     void whereEachSettingCameFromIsLoggedAtDebug() throws Exception {
         MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
         CheckMojo mojo = repo.check();
@@ -101,7 +130,7 @@ class CheckMojoTests {
         CheckMojo mojo = repo.check();
         mojo.failOn = "fatal";
         MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
-        assertEquals("mesolint: failOn (mesolint.failOn): must be error, warning or info, not 'fatal'",
+        assertEquals("mesolint: failOn (mesolint.failOn): must be error, warning, info or none, not 'fatal'",
                 error.getMessage());
 
         CheckMojo unknownProfile = repo.check();

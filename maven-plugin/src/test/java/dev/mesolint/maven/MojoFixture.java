@@ -49,7 +49,7 @@ final class MojoFixture {
         mojo.programmes = root.resolve("programmes").toFile();
         mojo.outputDirectory = root.resolve("target/mesolint").toFile();
         mojo.catalogues = new ArrayList<>();
-        mojo.useCache = true;
+        mojo.cache = true;
         return mojo;
     }
 
