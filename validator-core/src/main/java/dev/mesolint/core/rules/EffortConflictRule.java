@@ -42,7 +42,7 @@ public final class EffortConflictRule implements Rule {
                     + "first. Ballistic and Olympic lifts are not read through the %1RM relation at all (a set of "
                     + "cleans ends at a technical miss, not at muscular failure); only their RIR and RPE are "
                     + "compared. Under the strength and general-fitness profiles, a strength-purpose set (at most 6 "
-                    + "reps at 70% of 1RM or more) that leaves more in reserve than stated is not called "
+                    + "reps at 60% of 1RM or more) that leaves more in reserve than stated is not called "
                     + "mislabelled: heavy low-rep sets stay far from failure on purpose, and the stated reserve "
                     + "there is a ceiling on effort, not a target.",
             "Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7; Brzycki 1993; Zourdos et al. 2016, "

@@ -24,19 +24,20 @@ final class StrengthSets {
                         "Most reps (top of the range) of a set whose purpose is strength and that this rule therefore "
                                 + "does not judge; 0 judges every set (the strength and general-fitness profiles "
                                 + "use 6)."),
-                RuleParameter.percent(MIN_LOAD, 0.70, 0.5, 1.0,
+                RuleParameter.percent(MIN_LOAD, 0.60, 0.5, 1.0,
                         "Least share of 1RM of such a set: stated, or read from reps + reserve through the model's "
-                                + "%1RM relation (6 reps at RIR 5 is an 11-rep effort, about 72%)."));
+                                + "%1RM relation (6 reps at RIR 8 is a 14-rep effort, about 64%)."));
     }
 
     /** Words for a rationale: what the two parameters leave alone. */
     static final String RATIONALE = "Ballistic and Olympic lifts (catalogue ballistic: true) are never judged: their "
             + "sets end at a technical miss, far from muscular failure by design. Under the strength and "
-            + "general-fitness profiles, strength-purpose sets are not judged either: at most 6 reps at 70% of 1RM "
-            + "or more (the load stated, or read from reps and reserve). Heavy sets of few reps are done for "
-            + "strength and skill, not for the growth stimulus of their last reps, and they stay far from failure "
-            + "on purpose (NSCA: strength loads of 6 reps or fewer; novice linear progressions start their fives "
-            + "near 70%, common practice). A 3x12 at RIR 6 is still judged under every profile.";
+            + "general-fitness profiles, strength-purpose sets are not judged either: at most 6 reps at 60% of 1RM "
+            + "or more (the load stated, or read from reps and reserve). Sets of few reps are done for strength "
+            + "and skill, not for the growth stimulus of their last reps, and they stay far from failure on "
+            + "purpose (NSCA: strength loads of 6 reps or fewer; ACSM 2009: novices start strength training at "
+            + "60-70% of 1RM, so a novice linear progression's first fives are light by design). A 3x12 at RIR 6 "
+            + "is still judged under every profile.";
 
     /** True when the set's exercise is ballistic, or the profile leaves strength-purpose sets and this is one. */
     static boolean notJudged(RuleContext context, SetMetrics set) {

@@ -29,6 +29,7 @@ public final class VolumeSpikeRule implements Rule {
     public static final String ID = "volume-spike";
     static final String MAX_RATIO = "max-ratio";
     static final String MIN_ADDED_SETS = "min-added-sets";
+    static final String MIN_BASELINE_WEEKS = "min-baseline-weeks";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "A muscle's weekly working sets stay within 1.5 x the mean of up to four non-deload weeks before, for "
@@ -39,7 +40,10 @@ public final class VolumeSpikeRule implements Rule {
                                     + "before (up to the model's acuteChronicWeeks, 4)."),
                     RuleParameter.number(MIN_ADDED_SETS, 3, 0, 20,
                             "Fewest working sets above that mean that make a jump worth reporting, so that small "
-                                    + "muscles going from 1 to 2 sets are not called a spike.")),
+                                    + "muscles going from 1 to 2 sets are not called a spike."),
+                    RuleParameter.integer(MIN_BASELINE_WEEKS, 2, 1, 8,
+                            "Fewest non-deload weeks before a week that make a mean to compare it with: one week "
+                                    + "alone swings with A/B session rotations.")),
             "Gabbett's acute:chronic workload ratio compares a week's load with the rolling mean of the four weeks "
                     + "before; in team sports, weeks well above about 1.5 times that mean went with more injuries. "
                     + "Applied to a muscle's weekly working sets, it asks that volume rise in steps the body has been "
@@ -51,8 +55,10 @@ public final class VolumeSpikeRule implements Rule {
                     + "ratio has been criticised: it couples the two figures mathematically (Lolli et al. 2019), "
                     + "rests on observational data, and its thresholds should not be read as injury predictions "
                     + "(Impellizzeri et al. 2020, 2021). mesolint uses it only as a plain flag for sudden jumps, and "
-                    + "not before there is a week to compare with: the first week, and muscles not trained directly "
-                    + "in the weeks before, are not checked.",
+                    + "not before there are two training weeks to compare with: a programme that alternates A and B "
+                    + "sessions over three days a week does one session's lifts twice one week and once the next, "
+                    + "so a single week before is no baseline (common practice). The first weeks, and muscles not "
+                    + "trained directly in the weeks before, are not checked.",
             "Gabbett 2016, Br J Sports Med 50(5):273-280; critiques: Lolli et al. 2019; "
                     + "Impellizzeri et al. 2020 and 2021; sets, not load, as the volume measure for hypertrophy: "
                     + "Schoenfeld et al. 2017, J Sports Sci 35(11):1073-1082");
@@ -67,12 +73,13 @@ public final class VolumeSpikeRule implements Rule {
         double maxRatio = context.param(MAX_RATIO);
         double minAdded = context.param(MIN_ADDED_SETS);
         int window = context.metrics().parameters().acuteChronicWeeks();
+        int minWeeks = (int) context.param(MIN_BASELINE_WEEKS);
         List<WeekMetrics> weeks = context.metrics().weeks();
         List<Map<Muscle, Integer>> sets = weeks.stream().map(w -> directSets(context, w)).toList();
         for (int i = 1; i < weeks.size(); i++) {
             WeekMetrics week = weeks.get(i);
             List<Integer> before = baseline(weeks, i, window);
-            if (week.deload() || before.isEmpty()) {
+            if (week.deload() || before.size() < Math.min(minWeeks, window)) {
                 continue;
             }
             for (Map.Entry<Muscle, Integer> e : sets.get(i).entrySet()) {

@@ -161,9 +161,9 @@ class RuleMessagesTests {
     @Test
     void intensityJump() {
         // ACSM 2009 position stand (Ratamess et al., MSSE 41(3):687-708): load increments of 2-10%
-        assertEquals("warning barbell-bench-press, week 2: top set 90% of 1RM, 12.5 points over the 77.5% of week 1; "
-                + "the hypertrophy profile flags rises over 10 points a week (fix: load: 87.5% for the top set this "
-                + "week, and the rest of the rise next week)", text(found("intensity-jump/failing.yaml",
+        assertEquals("warning barbell-bench-press, week 2 day 1 (Upper): top set 90% of 1RM, 12.5 points over the "
+                + "77.5% of week 1 day 1 (Upper); the hypertrophy profile flags rises over 10 points (fix: load: "
+                + "87.5% for the top set this session, and the rest of the rise next time)", text(found("intensity-jump/failing.yaml",
                         IntensityJumpRule.ID).get(0)));
     }
 }
