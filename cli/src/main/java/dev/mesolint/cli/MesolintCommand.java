@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
         footer = {"", ConfigOptions.PRECEDENCE, "",
             "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
             "", "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
+        subcommands = {CheckCommand.class, DiffCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
             ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
             AutoComplete.GenerateCompletion.class,
             CommandLine.HelpCommand.class})

@@ -13,12 +13,17 @@ public final class ReportFiles {
 
     /** Writes {@code input} in the target's format to the target's path (UTF-8), replacing any earlier file. */
     public static void write(ReportInput input, ReportTarget target) throws IOException {
-        Path path = target.path().toAbsolutePath();
+        write(input, target.path(), target.format().writer(target.path().toAbsolutePath()));
+    }
+
+    /** Writes {@code input} with {@code writer} to {@code file} (UTF-8), replacing any earlier file. */
+    public static void write(ReportInput input, Path file, ReportWriter writer) throws IOException {
+        Path path = file.toAbsolutePath();
         if (path.getParent() != null) {
             Files.createDirectories(path.getParent());
         }
         try (Writer out = Files.newBufferedWriter(path, StandardCharsets.UTF_8)) {
-            target.format().writer(path).write(input, out);
+            writer.write(input, out);
         }
     }
 }

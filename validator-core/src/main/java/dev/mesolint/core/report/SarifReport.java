@@ -12,6 +12,7 @@ import java.io.IOException;
 import java.io.Writer;
 import java.net.URI;
 import java.net.URISyntaxException;
+import java.util.List;
 import java.util.Locale;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -28,6 +29,21 @@ public final class SarifReport implements ReportWriter {
     static final String SRCROOT = "%SRCROOT%";
     /** The key of our hash in {@code partialFingerprints}; versioned so that a new hash can sit beside the old. */
     static final String FINGERPRINT_KEY = "mesolintFingerprint/v1";
+
+    private final List<Finding> absent;
+
+    /** The run's findings, each {@code new} or (held by a baseline) {@code unchanged}. */
+    public SarifReport() {
+        this(List.of());
+    }
+
+    /**
+     * The run's findings, and after them {@code absent}: findings of an earlier run that this one no longer has,
+     * reported with {@code baselineState: absent} (a review of a change lists what it resolved).
+     */
+    public SarifReport(List<Finding> absent) {
+        this.absent = List.copyOf(absent);
+    }
 
     @Override
     public void write(ReportInput input, Writer out) throws IOException {
@@ -56,6 +72,10 @@ public final class SarifReport implements ReportWriter {
                     results.add(result(input, f, sources));
                 }
             }
+        }
+        // Resolved findings are located in the base revision's files, which are not on disk: no snippets.
+        for (Finding f : absent) {
+            results.add(result(input, f, SourceLines.none()).put("baselineState", "absent"));
         }
         run.put("columnKind", "unicodeCodePoints");
         ObjectNode properties = run.putObject("properties");

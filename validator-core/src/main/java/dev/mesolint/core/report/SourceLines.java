@@ -24,6 +24,11 @@ final class SourceLines {
         this.root = root;
     }
 
+    /** No snippets: for findings whose files are not on disk as they were (a base revision's, say). */
+    static SourceLines none() {
+        return new SourceLines(null);
+    }
+
     /** Line {@code number} (1-based) of the file shown as {@code shownPath} (relative to the root, or absolute). */
     Optional<String> line(String shownPath, int number) {
         List<String> lines = files.computeIfAbsent(shownPath, this::read);
@@ -35,6 +40,9 @@ final class SourceLines {
     }
 
     private List<String> read(String shownPath) {
+        if (root == null) {
+            return List.of();
+        }
         try {
             Path file = root.resolve(shownPath).normalize();
             if (!Files.isRegularFile(file) || Files.size(file) > 4L * 1024 * 1024) {
