@@ -3,6 +3,13 @@ package dev.mesolint.cli;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.review.ChangeReview;
+import dev.mesolint.core.review.NewSinceGate;
+import dev.mesolint.core.review.Review;
+import dev.mesolint.core.review.ReviewHtmlSection;
+import dev.mesolint.core.review.ReviewInput;
+import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.DuplicateProgrammeIds;
@@ -83,6 +90,12 @@ final class CheckCommand implements Callable<Integer> {
                     + "as baselined and not counted (default: baseline in the configuration, if any).")
     Path baseline;
 
+    @Option(names = "--new-since", paramLabel = "REV",
+            description = "Count only the findings that are new since this git revision (a branch, tag or commit, "
+                    + "read from the repository's history: no baseline file). Errors of the safety rules (athlete "
+                    + "constraints among them) and findings in files that did not load, at REV or now, always count.")
+    String newSince;
+
     @Option(names = "--no-baseline", description = "Ignore the configuration's baseline: count every finding.")
     boolean noBaseline;
 
@@ -132,13 +145,15 @@ final class CheckCommand implements Callable<Integer> {
         CheckRequest request;
         InstalledRules installed;
         Checker checker;
+        Review review = null;
         long started = System.nanoTime();
         boolean empty;
         List<String> hidden;
         try {
             installed = Installed.rules();
-            workspace = Workspace.open(options.toRunOptions(located, catalogues.files, level,
-                    Optional.ofNullable(baseline)), installed.rules());
+            RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
+                    Optional.ofNullable(baseline));
+            workspace = Workspace.open(runOptions, installed.rules());
             request = workspace.request(piped.isPresent() ? List.of() : paths);
             Checker built = new Checker(request, installed.rules());
             checker = built;
@@ -152,6 +167,11 @@ final class CheckCommand implements Callable<Integer> {
             if (!noBaseline) {
                 report = Baseline.applyConfigured(workspace, report);
             }
+            if (newSince != null) {
+                review = ChangeReview.run(new ReviewRequest(runOptions, piped.isPresent() ? List.of() : paths,
+                        Optional.of(newSince), Optional.empty()), installed.rules());
+                report = new NewSinceGate(installed.rules()).apply(report, review);
+            }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());
         }
@@ -160,10 +180,14 @@ final class CheckCommand implements Callable<Integer> {
                 + " (check the path; it is read from the current folder)"));
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
-                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent())
+                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent() || review != null)
                 .withJunitFailAt(junitLevel);
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
                 .withReasons(!noReasons).withCatalogue(checker.catalogue());
+        if (review != null) {
+            coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(review, installed.rules(),
+                    workspace.root(), !noReasons)));
+        }
         ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording)
                 .withHtml(coach);
         if (stdoutFormat == ReportFormat.CONSOLE) {
