@@ -3,6 +3,13 @@ package dev.mesolint.cli;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.review.ChangeReview;
+import dev.mesolint.core.review.NewSinceGate;
+import dev.mesolint.core.review.Review;
+import dev.mesolint.core.review.ReviewHtmlSection;
+import dev.mesolint.core.review.ReviewInput;
+import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.DuplicateProgrammeIds;
@@ -12,13 +19,13 @@ import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.HtmlOptions;
-import dev.mesolint.core.report.ReportFiles;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportInput;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import dev.mesolint.core.rules.InternalErrorRule;
+import dev.mesolint.core.text.SafeText;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -41,7 +48,7 @@ import picocli.CommandLine.Parameters;
             "Standard output carries one document, so it can be piped: --format sarif | jq, or --report sarif=-.",
             "'-' as the PATH reads one programme from standard input (editors: add --stdin-filename PATH)."},
         footer = {"", ConfigOptions.PRECEDENCE, "",
-            "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
+            MesolintCommand.EXIT_CODES,
             "", "Caution: " + Mesolint.CAUTION})
 final class CheckCommand implements Callable<Integer> {
 
@@ -83,6 +90,12 @@ final class CheckCommand implements Callable<Integer> {
                     + "as baselined and not counted (default: baseline in the configuration, if any).")
     Path baseline;
 
+    @Option(names = "--new-since", paramLabel = "REV",
+            description = "Count only the findings that are new since this git revision (a branch, tag or commit, "
+                    + "read from the repository's history: no baseline file). Errors of the safety rules (athlete "
+                    + "constraints among them) and findings in files that did not load, at REV or now, always count.")
+    String newSince;
+
     @Option(names = "--no-baseline", description = "Ignore the configuration's baseline: count every finding.")
     boolean noBaseline;
 
@@ -109,6 +122,10 @@ final class CheckCommand implements Callable<Integer> {
                     + "or info (default: the fail level, so a case fails exactly when its findings fail the run).")
     String junitFailAt;
 
+    @Option(names = "--allow-empty",
+            description = "Exit 0 when no programme file is found (default: a run that checks nothing fails, exit 2).")
+    boolean allowEmpty;
+
     @CommandLine.ParentCommand
     MesolintCommand parent;
 
@@ -128,33 +145,49 @@ final class CheckCommand implements Callable<Integer> {
         CheckRequest request;
         InstalledRules installed;
         Checker checker;
+        Review review = null;
         long started = System.nanoTime();
+        boolean empty;
+        List<String> hidden;
         try {
             installed = Installed.rules();
-            workspace = Workspace.open(options.toRunOptions(located, catalogues.files, level,
-                    Optional.ofNullable(baseline)), installed.rules());
+            RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
+                    Optional.ofNullable(baseline));
+            workspace = Workspace.open(runOptions, installed.rules());
             request = workspace.request(piped.isPresent() ? List.of() : paths);
             Checker built = new Checker(request, installed.rules());
             checker = built;
             report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
                     .orElseGet(built::run));
+            empty = piped.isEmpty() && report.nothingChecked();
+            hidden = report.hidden();
             built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
-                    + bad.displayPath() + " did not load (see its findings): its exercises are unknown in this run"));
+                    + SafeText.line(bad.displayPath()) + " did not load (see its findings): its exercises are unknown "
+                    + "in this run"));
             if (!noBaseline) {
                 report = Baseline.applyConfigured(workspace, report);
+            }
+            if (newSince != null) {
+                review = ChangeReview.run(new ReviewRequest(runOptions, piped.isPresent() ? List.of() : paths,
+                        Optional.of(newSince), Optional.empty()), installed.rules());
+                report = new NewSinceGate(installed.rules()).apply(report, review);
             }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());
         }
         // Missing paths first, so that no summary of what was checked comes before the error.
-        report.missing().forEach(m -> cli.getErr().println("mesolint: no such file or folder: " + m
+        report.missing().forEach(m -> cli.getErr().println("mesolint: no such file or folder: " + SafeText.line(m)
                 + " (check the path; it is read from the current folder)"));
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
-                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent())
+                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent() || review != null)
                 .withJunitFailAt(junitLevel).withGitAt(workspace.root());
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
                 .withReasons(!noReasons).withCatalogue(checker.catalogue());
+        if (review != null) {
+            coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(review, installed.rules(),
+                    workspace.root(), !noReasons)));
+        }
         ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording)
                 .withHtml(coach);
         if (stdoutFormat == ReportFormat.CONSOLE) {
@@ -165,19 +198,28 @@ final class CheckCommand implements Callable<Integer> {
             stdoutFormat.writer(null).write(input, cli.getOut());
             cli.getOut().flush();
         }
-        for (ReportTarget target : reports) {
-            if (target.toStdout()) {
-                continue;
-            }
-            try {
-                ReportFiles.write(input, target);
-            } catch (IOException e) {
-                cli.getErr().println("mesolint: cannot write the " + target.format().id()
-                        + " report to " + target.path() + ": " + e.getMessage());
+        boolean unwritten = false;
+        try {
+            RunReports.writeAll(input, reports.stream().filter(t -> !t.toStdout()).toList());
+        } catch (IOException e) {
+            // Every other report was still written; the failed ones keep their previous file untouched.
+            cli.getErr().println("mesolint: " + SafeText.line(e.getMessage()));
+            unwritten = true;
+        }
+        if (!hidden.isEmpty()) {
+            cli.getErr().println("mesolint: " + hidden.size() + " hidden .yaml file" + (hidden.size() == 1 ? "" : "s")
+                    + " not checked (folders skip names that start with '.'; name a file to check it): "
+                    + SafeText.line(String.join(", ", hidden)));
+        }
+        if (empty && report.missing().isEmpty()) {
+            cli.getErr().println("mesolint: no programme file (*.yaml, *.yml) found in "
+                    + SafeText.line(paths.toString()) + ": nothing was checked"
+                    + (allowEmpty ? "" : "; pass --allow-empty when that is expected"));
+            if (!allowEmpty) {
                 return MesolintCommand.EXIT_USAGE;
             }
         }
-        boolean missing = !report.missing().isEmpty();
+        boolean missing = !report.missing().isEmpty() || unwritten;
         boolean internal = report.active().stream().anyMatch(f -> f.ruleId().equals(InternalErrorRule.ID));
         if (missing || internal) {
             return MesolintCommand.EXIT_USAGE;

@@ -34,11 +34,16 @@ final class ConfigOptions {
                     + "general-fitness) or a team profile file. Overrides the goal and the configuration.")
     String profile;
 
+    @Option(names = "--allow-outside-root",
+            description = "Accept paths in the configuration (catalogues, profiles, baseline) that lead outside the "
+                    + "root once links are resolved (refused by default).")
+    boolean allowOutsideRoot;
+
     /** The options for checking {@code inputs}: the root and configuration found by walking up from them. */
     RunOptions toRunOptions(List<Path> inputs, List<Path> catalogues, Optional<Severity> failOn,
             Optional<Path> baseline) {
         return new RunOptions(RepositoryLayout.discover(inputs, Optional.ofNullable(root), Path.of("")), Optional.ofNullable(config),
-                Optional.ofNullable(profile), failOn, catalogues, baseline);
+                Optional.ofNullable(profile), failOn, catalogues, baseline).allowingOutsideRoot(allowOutsideRoot);
     }
 
     /** {@code --catalogue}, for the commands that check programmes. */

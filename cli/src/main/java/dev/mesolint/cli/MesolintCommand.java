@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
+import dev.mesolint.core.text.SafeText;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import picocli.AutoComplete;
@@ -13,14 +14,18 @@ import picocli.CommandLine.Command;
         versionProvider = MesolintCommand.Version.class,
         description = "Checks resistance-training programmes written in YAML the way a compiler checks code.",
         footer = {"", ConfigOptions.PRECEDENCE, "",
-            "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, configuration or internal error.",
+            MesolintCommand.EXIT_CODES,
             "", "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
+        subcommands = {CheckCommand.class, DiffCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
             ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
             AutoComplete.GenerateCompletion.class,
             CommandLine.HelpCommand.class})
 public final class MesolintCommand implements Runnable {
     static final int EXIT_USAGE = 2;
+    /** Out of memory or stack: the run was stopped, so nothing it printed can be trusted as complete. */
+    static final int EXIT_RESOURCE_LIMIT = 3;
+    static final String EXIT_CODES = "Exit codes: 0 clean, 1 findings at or above the fail level, 2 usage, "
+            + "configuration or internal error, or no file checked, 3 out of memory (a resource limit).";
 
     /** Standard input, for {@code check -}; a field so that tests can hand in their own. */
     private InputStream in = System.in;
@@ -58,10 +63,31 @@ public final class MesolintCommand implements Runnable {
         cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
             // No stack traces for users: one line with the cause, exit 2.
             commandLine.getErr().println("mesolint: " + e.getClass().getSimpleName()
-                    + (e.getMessage() == null ? "" : ": " + e.getMessage()));
+                    + (e.getMessage() == null ? "" : ": " + SafeText.line(e.getMessage())));
             return EXIT_USAGE;
         });
-        return cli.execute(args);
+        try {
+            return cli.execute(args);
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            return resourceLimit(e, err);
+        } catch (RuntimeException e) {
+            // A failure picocli did not route through the handler (in a report writer's thread, say): still no trace.
+            Throwable cause = e.getCause() instanceof Error error ? error : e;
+            if (cause instanceof OutOfMemoryError || cause instanceof StackOverflowError) {
+                return resourceLimit((Error) cause, err);
+            }
+            err.println("mesolint: internal error: " + SafeText.line(String.valueOf(e.getMessage())));
+            return EXIT_USAGE;
+        }
+    }
+
+    /** A clear message for a run that ran out of memory or stack; exit 3 tells CI it was not a finding. */
+    static int resourceLimit(Error e, PrintWriter err) {
+        err.println("mesolint: the run ran out of " + (e instanceof OutOfMemoryError ? "memory" : "stack")
+                + " and was stopped; its results are incomplete. Give Java more memory (e.g. JAVA_TOOL_OPTIONS="
+                + "-Xmx1g), or check fewer files at a time, and report the file that caused it.");
+        err.flush();
+        return EXIT_RESOURCE_LIMIT;
     }
 
     /** Reads the version from the core jar. */

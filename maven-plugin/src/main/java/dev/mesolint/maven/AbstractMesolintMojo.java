@@ -131,6 +131,15 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     @Parameter(property = "mesolint.showWaived", defaultValue = "false")
     boolean showWaived;
 
+    /**
+     * Leave the reasons of the athlete's constraints (health data) out of the HTML report, for a report that will be
+     * shared.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.noReasons", defaultValue = "false")
+    boolean noReasons;
+
     /** Paths in findings are shown relative to this folder. */
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     File basedir;
@@ -162,9 +171,9 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         CachedCheck.Outcome outcome = execution.check(useCache() && !figures
                 ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
         if (!targets.isEmpty()) {
-            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets, !ignoreBaseline
-                    && prepared.workspace().baselineFile().isPresent(),
-                    outputDirectory.toPath());
+            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
+                    outputDirectory.toPath(), !noReasons, !ignoreBaseline
+                    && prepared.workspace().baselineFile().isPresent());
         }
         afterCheck(outcome, reportOnly);
     }

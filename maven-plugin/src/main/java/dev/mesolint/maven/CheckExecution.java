@@ -4,8 +4,11 @@ import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
+import dev.mesolint.core.report.HtmlOptions;
+import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
@@ -63,21 +66,31 @@ final class CheckExecution {
     }
 
     /** Writes every report of the run; a report that cannot be written is a build error. */
-    void writeReports(CachedCheck.Outcome outcome, Duration elapsed, List<ReportTarget> targets,
-            boolean baselineInForce, Path folder)
-            throws MojoExecutionException {
+    void writeReports(CachedCheck.Outcome outcome, Duration elapsed, List<ReportTarget> targets, Path folder,
+            boolean showReasons, boolean baselineInForce) throws MojoExecutionException {
         try {
             ReportOptions options = ReportOptions.DEFAULTS.withGitAt(prepared.request().root())
                     .withBaselineInForce(baselineInForce);
             RunReports.writeAll(RunReports.input(outcome.report(), prepared.rules(), prepared.request(), elapsed)
-                    .withOptions(options),
-                    targets);
+                    .withOptions(options).withHtml(coachReport(targets, showReasons)), targets);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot write the reports to " + folder + ": "
                     + e.getMessage(), e);
         }
         log.info("mesolint: reports written to " + folder + ": " + targets.stream()
                 .map(t -> t.path().getFileName().toString()).collect(Collectors.joining(", ")));
+    }
+
+    /**
+     * The coach's report options: the repository's plate increment, reasons shown or not, and the run's catalogue
+     * (read again only when an HTML report is written, for exercise names and capped regions).
+     */
+    private HtmlOptions coachReport(List<ReportTarget> targets, boolean showReasons) {
+        HtmlOptions options = HtmlOptions.DEFAULTS.withReasons(showReasons)
+                .withPlateIncrement(prepared.workspace().config().plateIncrement());
+        boolean html = targets.stream().anyMatch(t -> t.format() == ReportFormat.HTML
+                || t.format() == ReportFormat.HTML_SHEET);
+        return html ? options.withCatalogue(new Checker(prepared.request(), prepared.rules()).catalogue()) : options;
     }
 
     private void save(ResultCache cache) {

@@ -23,7 +23,8 @@ public class ReportMojo extends AbstractMesolintMojo {
      * The report formats to write to the output folder (comma-separated on the command line): {@code console}
      * ({@code mesolint.txt}, with waived findings and their reasons), {@code html} ({@code mesolint.html}, for
      * coaches), {@code json} ({@code mesolint.json}), {@code sarif} ({@code mesolint.sarif}), {@code junit}
-     * ({@code TEST-mesolint.xml}).
+     * ({@code TEST-mesolint.xml}), and on request {@code html-sheet} ({@code mesolint-sheet.html}, the athlete's
+     * sheet).
      *
      * @since 0.1.0
      */

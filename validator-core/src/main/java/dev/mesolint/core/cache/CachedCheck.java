@@ -8,13 +8,13 @@ import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.source.SafeFiles;
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.function.Supplier;
 
 /**
@@ -47,13 +47,9 @@ public final class CachedCheck {
      * result.
      */
     public Outcome run(Optional<ResultCache> cache) throws IOException {
-        List<Path> missing = new ArrayList<>();
-        List<Path> files;
-        try {
-            files = ProgrammeFiles.discover(request.inputs(), missing);
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
-        }
+        ProgrammeFiles.Discovery found = ProgrammeFiles.find(request.root(), request.inputs(),
+                Set.copyOf(request.extraCatalogues()));
+        List<Path> files = found.programmes();
         Supplier<Checker> checker = lazily(() -> new Checker(request, rules));
         List<FileReport> reports = new ArrayList<>(cache.flatMap(ResultCache::catalogueReports)
                 .orElseGet(() -> checker.get().catalogueReports()));
@@ -76,7 +72,8 @@ public final class CachedCheck {
         }
         // Ids are compared across all files, cached or not, after the cache has stored each file's own findings.
         List<FileReport> marked = DuplicateProgrammeIds.mark(reports, Severity.ERROR);
-        RunReport report = new RunReport(marked, request.failOn(), missing.stream().map(Path::toString).toList());
+        List<FileReport> refused = found.refused().isEmpty() ? List.of() : checker.get().refusedReports(found);
+        RunReport report = RunReport.of(marked, request.failOn(), found, refused, request.root());
         return new Outcome(report, reused, pending.size() - reused, unreadable);
     }
 
@@ -88,7 +85,7 @@ public final class CachedCheck {
         String shown = ProgrammeFiles.display(request.root(), file);
         byte[] content;
         try {
-            content = Files.readAllBytes(file);
+            content = SafeFiles.readRegular(file, request.limits().maxFileBytes());
         } catch (IOException e) {
             return new Pending(file, shown, null, checker.get().checkFile(file), false);
         }

@@ -1,6 +1,7 @@
 package dev.mesolint.core.config;
 
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.source.SafeFiles;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.Pointers;
@@ -38,9 +39,14 @@ public final class ConfigDocument {
 
     /** Reads {@code file} within {@code limits} (JSON files, being YAML too, are read the same way). */
     public static ConfigDocument read(Path file, String shown, YamlLimits limits) throws ConfigProblem {
-        if (!Files.isRegularFile(file)) {
+        if (!Files.exists(file)) {
             throw new ConfigProblem(shown, null, "no such file", "check the path; relative paths in a configuration "
                     + "file are read from the folder that holds it");
+        }
+        String notRegular = SafeFiles.notRegular(file);
+        if (notRegular != null) {
+            // Checked before opening: a FIFO would block the run forever, a device would never end.
+            throw new ConfigProblem(shown, null, "cannot be read: " + notRegular, "name a regular YAML file");
         }
         try {
             return new ConfigDocument(shown, new LocatedYamlReader(limits).read(file));

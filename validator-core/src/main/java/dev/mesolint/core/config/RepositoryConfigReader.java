@@ -39,9 +39,30 @@ public final class RepositoryConfigReader {
         }
     }
 
-    /** Reads {@code file}; {@code shown} is how messages name it (relative to the root where possible). */
+    /**
+     * Reads {@code file}; {@code shown} is how messages name it (relative to the root where possible). Every path it
+     * names must lie inside the folder that holds it.
+     */
     public static RepositoryConfig read(Path file, String shown) throws ConfigProblem {
+        return read(file, shown, file.toAbsolutePath().normalize().getParent(), false);
+    }
+
+    /**
+     * Reads {@code file}; every path it names (catalogues, profile files, baseline) must lie inside {@code root} once
+     * links are resolved, unless {@code allowOutsideRoot}: a configuration must not make mesolint read, and quote
+     * back, a file elsewhere on the machine.
+     */
+    public static RepositoryConfig read(Path file, String shown, Path root, boolean allowOutsideRoot)
+            throws ConfigProblem {
         ConfigDocument doc = ConfigDocument.read(file, shown);
+        RepositoryConfig config = parse(doc, file);
+        if (!allowOutsideRoot) {
+            new Confinement(doc, root).check(config);
+        }
+        return config;
+    }
+
+    private static RepositoryConfig parse(ConfigDocument doc, Path file) throws ConfigProblem {
         Path base = file.toAbsolutePath().normalize().getParent();
         JsonNode root = doc.root();
         if (!root.isObject()) {

@@ -26,6 +26,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /**
  * Checks programme files: read safely, validate against the schema, bind, expand weeks, run the rules.
@@ -73,11 +74,23 @@ public final class Checker {
 
     /** Checks every programme file found under {@code request.inputs()}. */
     public RunReport run() {
-        List<Path> missing = new ArrayList<>();
-        List<Path> files = ProgrammeFiles.discover(request.inputs(), missing);
+        ProgrammeFiles.Discovery found = discover();
         List<FileReport> reports = new ArrayList<>(catalogueReports);
-        reports.addAll(files.parallelStream().map(this::checkFile).toList());
-        return new RunReport(reports, request.failOn(), missing.stream().map(Path::toString).toList());
+        reports.addAll(found.programmes().parallelStream().map(this::checkFile).toList());
+        return RunReport.of(reports, request.failOn(), found, refusedReports(found), request.root());
+    }
+
+    /** The programme files of the request, and the entries that cannot be read as programmes. */
+    public ProgrammeFiles.Discovery discover() {
+        return ProgrammeFiles.find(request.root(), request.inputs(), Set.copyOf(request.extraCatalogues()));
+    }
+
+    /** One report per entry that should have been a programme but cannot be read as one: never dropped silently. */
+    public List<FileReport> refusedReports(ProgrammeFiles.Discovery found) {
+        return found.refused().stream()
+                .map(r -> violationReport(ProgrammeFiles.display(request.root(), r.path()), null, FrameworkRules.YAML_SYNTAX,
+                        List.of(new Violation(Location.START, r.reason(), r.hint()))))
+                .toList();
     }
 
     /** Checks one document read elsewhere (standard input), shown and configured as if it were {@code shownAs}. */

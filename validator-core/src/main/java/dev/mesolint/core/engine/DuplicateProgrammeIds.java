@@ -23,7 +23,7 @@ public final class DuplicateProgrammeIds {
 
     /** {@code run} with the shared ids marked: what a check of a repository reports. */
     public static RunReport mark(RunReport run) {
-        return new RunReport(mark(run.files(), Severity.ERROR), run.failOn(), run.missing(), run.baselineApplied());
+        return run.withFiles(mark(run.files(), Severity.ERROR));
     }
 
     /** {@code reports} with a finding added to each file whose programme id another file also has. */

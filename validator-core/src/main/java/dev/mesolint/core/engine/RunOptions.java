@@ -17,9 +17,10 @@ import java.util.Optional;
  * @param profile     a profile name or team profile file for every programme, overriding all profile selection
  * @param baseline    a baseline file to compare with, overriding the configuration's
  * @param foundConfig the configuration file found by walking up from the checked paths ({@link RepositoryLayout})
+ * @param allowOutsideRoot accept configured paths that resolve outside {@code root} (refused by default)
  */
 public record RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
-        List<Path> catalogues, Optional<Path> baseline, Optional<Path> foundConfig) {
+        List<Path> catalogues, Optional<Path> baseline, Optional<Path> foundConfig, boolean allowOutsideRoot) {
 
     public RunOptions {
         root = root.toAbsolutePath().normalize();
@@ -29,13 +30,18 @@ public record RunOptions(Path root, Optional<Path> config, Optional<String> prof
     /** Options for a known root: the configuration is {@code root/.mesolint.yaml} when it exists. */
     public RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
             List<Path> catalogues, Optional<Path> baseline) {
-        this(root, config, profile, failOn, catalogues, baseline, atRoot(root));
+        this(root, config, profile, failOn, catalogues, baseline, atRoot(root), false);
     }
 
     /** Options whose root and configuration come from walking up ({@link RepositoryLayout#discover}). */
     public RunOptions(RepositoryLayout layout, Optional<Path> config, Optional<String> profile,
             Optional<Severity> failOn, List<Path> catalogues, Optional<Path> baseline) {
-        this(layout.root(), config, profile, failOn, catalogues, baseline, layout.config());
+        this(layout.root(), config, profile, failOn, catalogues, baseline, layout.config(), false);
+    }
+
+    /** The same options, with configured paths that lead outside the root accepted or refused. */
+    public RunOptions allowingOutsideRoot(boolean allow) {
+        return new RunOptions(root, config, profile, failOn, catalogues, baseline, foundConfig, allow);
     }
 
     /** Nothing but the root. */

@@ -2,6 +2,8 @@ package dev.mesolint.core.engine;
 
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -9,12 +11,41 @@ import java.util.List;
  *
  * @param missing         inputs that named no file or folder (a usage error)
  * @param baselineApplied true when the run was compared with a baseline (so the summary says what it holds, even 0)
+ * @param programmes      programme entries found: files checked plus entries reported as unreadable
+ * @param hidden          hidden {@code .yaml} files skipped in folders, shown relative to the root
  */
-public record RunReport(List<FileReport> files, Severity failOn, List<String> missing, boolean baselineApplied) {
+public record RunReport(List<FileReport> files, Severity failOn, List<String> missing, boolean baselineApplied,
+        int programmes, List<String> hidden) {
 
     public RunReport {
         files = List.copyOf(files);
         missing = List.copyOf(missing);
+        hidden = List.copyOf(hidden);
+    }
+
+    /** A report whose every file is a programme entry, with nothing hidden. */
+    public RunReport(List<FileReport> files, Severity failOn, List<String> missing, boolean baselineApplied) {
+        this(files, failOn, missing, baselineApplied, files.size(), List.of());
+    }
+
+    /** The report of a run over {@code found}: {@code reports} (checked files) then the refused entries' reports. */
+    public static RunReport of(List<FileReport> reports, Severity failOn, ProgrammeFiles.Discovery found,
+            List<FileReport> refused, Path root) {
+        List<FileReport> all = new ArrayList<>(reports);
+        all.addAll(refused);
+        return new RunReport(all, failOn, found.missing().stream().map(Path::toString).toList(), false,
+                found.programmes().size() + found.refused().size(),
+                found.hidden().stream().map(h -> ProgrammeFiles.display(root, h)).toList());
+    }
+
+    /** True when the run found no programme to check or report: a run that checks nothing must say so. */
+    public boolean nothingChecked() {
+        return programmes == 0;
+    }
+
+    /** The same run with other file reports (duplicate ids marked, say); the counts are kept. */
+    public RunReport withFiles(List<FileReport> other) {
+        return new RunReport(other, failOn, missing, baselineApplied, programmes, hidden);
     }
 
     /** A run not compared with a baseline. */

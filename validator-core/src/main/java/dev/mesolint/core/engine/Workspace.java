@@ -88,11 +88,13 @@ public final class Workspace {
                         "check the path, or leave --config out to use " + RepositoryConfig.FILE_NAME
                                 + " in the root folder");
             }
-            return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file));
+            return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file), options.root(),
+                    options.allowOutsideRoot());
         }
         Optional<Path> found = options.foundConfig().filter(Files::isRegularFile);
         return found.isPresent()
-                ? RepositoryConfigReader.read(found.get(), ProgrammeFiles.display(options.root(), found.get()))
+                ? RepositoryConfigReader.read(found.get(), ProgrammeFiles.display(options.root(), found.get()),
+                        options.root(), options.allowOutsideRoot())
                 : RepositoryConfig.NONE;
     }
 

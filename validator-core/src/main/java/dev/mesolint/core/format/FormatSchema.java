@@ -46,6 +46,11 @@ public final class FormatSchema {
 
     /** The violations, located at the YAML node each is about, one per place, in file order. */
     public List<Violation> validate(LocatedDocument document) {
+        // Numbers no field accepts are refused first: the validator and the binder read numbers as long and int.
+        List<Violation> outOfRange = NumberRange.check(document);
+        if (!outOfRange.isEmpty()) {
+            return outOfRange;
+        }
         List<com.networknt.schema.Error> errors = schema.validate(document.root());
         Map<String, Violation> byPlace = new LinkedHashMap<>();
         for (com.networknt.schema.Error error : errors) {

@@ -5,6 +5,7 @@ import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.text.SafeText;
 import java.io.PrintWriter;
 import java.io.Writer;
 import java.util.ArrayList;
@@ -86,10 +87,11 @@ public final class ConsoleReport implements ReportWriter {
                 + style.severity(f.severity(), f.waived() || f.baselined(), word) + line.substring(wordEnd);
     }
 
+    /** The finding's first line; text from input is escaped ({@link SafeText#line}) so it cannot forge a line. */
     public static String line(Finding f) {
-        return f.file() + ":" + f.location().line() + ":" + f.location().column() + ": "
+        return SafeText.line(f.file()) + ":" + f.location().line() + ":" + f.location().column() + ": "
                 + (f.waived() ? "waived " : f.baselined() ? "baselined " : "") + f.severity().label() + " "
-                + f.ruleId() + ": " + f.message();
+                + f.ruleId() + ": " + SafeText.line(f.message());
     }
 
     /**
@@ -102,8 +104,9 @@ public final class ConsoleReport implements ReportWriter {
         if (f.baselined() && !f.waived()) {
             return lines;
         }
-        lines.add("    fix: " + f.fix());
-        f.waiver().ifPresent(w -> lines.add("    waived at line " + w.location().line() + ": " + w.reason()));
+        lines.add("    fix: " + SafeText.line(f.fix()));
+        f.waiver().ifPresent(w -> lines.add("    waived at line " + w.location().line() + ": "
+                + SafeText.line(w.reason())));
         return lines;
     }
 

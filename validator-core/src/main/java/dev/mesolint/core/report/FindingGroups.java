@@ -64,7 +64,7 @@ final class FindingGroups {
 
     static Place place(Optional<Programme> programme, Finding f) {
         SortedSet<Integer> named = FindingWeeks.of(f);
-        Integer namedDay = number(DAY, f.message());
+        Integer namedDay = f.facts().subject().day() != null ? f.facts().subject().day() : number(DAY, f.message());
         if (programme.isEmpty()) {
             return new Place(named, named.isEmpty() ? null : namedDay, null);
         }

@@ -8,7 +8,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * The weeks a finding is about, as its message names them first: {@code week 3}, {@code weeks 5-7},
+ * The weeks a finding is about: those its subject names, else those its message names first: {@code week 3}, {@code weeks 5-7},
  * {@code weeks 1-2, 4}. A message that names no week gives the empty set.
  */
 final class FindingWeeks {
@@ -20,7 +20,12 @@ final class FindingWeeks {
     private FindingWeeks() {
     }
 
+    /** The weeks the finding's subject names (the framework's merged week range), else those its message names. */
     static SortedSet<Integer> of(Finding finding) {
+        java.util.List<Integer> structured = finding.facts().subject().weeks();
+        if (!structured.isEmpty()) {
+            return Collections.unmodifiableSortedSet(new TreeSet<>(structured));
+        }
         return of(finding.message());
     }
 

@@ -7,11 +7,11 @@ import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 
 /** A finding's fingerprint as reports publish it: the SHA-256 of {@link Finding#fingerprint()}, in hex. */
-final class Fingerprints {
+public final class Fingerprints {
     private Fingerprints() {
     }
 
-    static String hash(Finding finding) {
+    public static String hash(Finding finding) {
         try {
             MessageDigest digest = MessageDigest.getInstance("SHA-256");
             return HexFormat.of().formatHex(digest.digest(finding.fingerprint().getBytes(StandardCharsets.UTF_8)));

@@ -9,7 +9,7 @@ final class HtmlPage {
 
     /**
      * The document head. The policy allows inline styles, data images and, when {@code script}, the one hashed
-     * script; nothing can be fetched.
+     * script (written by {@link #footer}, after the content it enhances); nothing can be fetched.
      */
     static void head(StringBuilder page, String title, boolean script) {
         page.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
@@ -20,9 +20,6 @@ final class HtmlPage {
                 .append("<link rel=\"icon\" href=\"data:,\">\n")
                 .append("<title>").append(Html.esc(title)).append("</title>\n<style>\n").append(HtmlStyles.CSS)
                 .append("</style>\n");
-        if (script) {
-            page.append("<script>").append(HtmlScript.JS).append("</script>\n");
-        }
         page.append("</head>\n");
     }
 
@@ -31,12 +28,17 @@ final class HtmlPage {
                 .append(Html.esc(Mesolint.CAUTION)).append("</p>\n");
     }
 
-    static void footer(StringBuilder page) {
+    /** The footer with the caution, then the page's script when {@code script}, and the end of the page. */
+    static void footer(StringBuilder page, boolean script) {
         page.append("<footer>\n");
         caution(page, "caution-end");
         page.append("<p>Written by mesolint ").append(Html.esc(Mesolint.version())).append(" · <a href=\"")
                 .append(Html.esc(Mesolint.INFORMATION_URI)).append("\">").append(Html.esc(Mesolint.INFORMATION_URI))
-                .append("</a></p>\n</footer>\n</body>\n</html>\n");
+                .append("</a></p>\n</footer>\n");
+        if (script) {
+            page.append("<script>").append(HtmlScript.JS).append("</script>\n");
+        }
+        page.append("</body>\n</html>\n");
     }
 
     static String fact(String term, String value) {

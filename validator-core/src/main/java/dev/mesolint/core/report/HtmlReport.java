@@ -48,7 +48,7 @@ public final class HtmlReport implements ReportWriter {
             page.append("<p class=\"no-figures\">No programme files were checked.</p>\n");
         }
         page.append("</main>\n");
-        HtmlPage.footer(page);
+        HtmlPage.footer(page, true);
         out.write(page.toString());
         out.flush();
     }
@@ -100,6 +100,9 @@ public final class HtmlReport implements ReportWriter {
             new PrescriptionView(p, loads, PrescriptionView.Mode.REPORT, findings, links, file.displayPath())
                     .render(page, id);
             page.append("</section>\n");
+            boolean strength = p.info().goal() == dev.mesolint.core.programme.Goal.STRENGTH
+                    || file.profile().equals("strength");
+            file.metrics().ifPresent(m -> StrengthView.render(page, m, loads, strength, id));
         }
         Optional<ProgrammeFigures> figures = input.figures().of(file);
         if (figures.isPresent()) {

@@ -110,7 +110,7 @@ final class HtmlStyles {
             table.index { width: 100%; margin: 16px 0 0; background: #fff; border: 1px solid var(--rule); }
             table.index caption { text-align: left; font-weight: bold; padding: 4px 0; }
             table.index th, table.index td { text-align: left; padding: 5px 10px; border-bottom: 1px solid var(--rule); }
-            table.index td:nth-child(n+4) { text-align: right; }
+            table.index td:nth-child(n+4) { text-align: right; white-space: nowrap; }
             button.sort { font: inherit; font-weight: bold; background: none; border: 0; padding: 0; cursor: pointer;
               color: var(--ink); text-decoration: underline dotted; }
             th[aria-sort="ascending"] button.sort::after { content: " ▴"; }
@@ -154,6 +154,16 @@ final class HtmlStyles {
             .filter .count { color: var(--muted); }
             .sr { position: absolute; width: 1px; height: 1px; overflow: hidden; clip: rect(0 0 0 0);
               white-space: nowrap; }
+            .spread { stroke: var(--ink); stroke-width: 2; }
+            .top-dot { fill: var(--ok); stroke: var(--ink); stroke-width: 1; }
+            .mean-dot { fill: #fff; stroke: var(--ink); stroke-width: 2; }
+            table.figures-table { margin: 6px 0 14px; font-size: 14px; }
+            table.figures-table caption { text-align: left; font-weight: bold; padding: 4px 0; }
+            table.figures-table th, table.figures-table td { text-align: left; padding: 3px 10px 3px 0;
+              border-bottom: 1px solid var(--rule); vertical-align: top; }
+            table.figures-table thead th { font-size: 12px; color: var(--muted); border-bottom: 2px solid var(--ink); }
+            table.figures-table .detail { display: block; font-size: 11px; font-weight: normal; }
+            td.out { font-weight: bold; background: #fff6dd; }
             .sheet-head { margin: 0 0 10px; }
             .sheet-head h1 { font-size: 22px; margin: 10px 0 2px; }
             @page { margin: 12mm 11mm; }
@@ -169,7 +179,7 @@ final class HtmlStyles {
               details > summary { list-style: none; margin-left: 0; }
               details > summary::-webkit-details-marker { display: none; }
               h1, h2, h3, h4, caption, figcaption, summary { break-after: avoid; }
-              figure, li.finding, table.plan, table.maxes, .how-to-read div, .caution, tr { break-inside: avoid; }
+              figure, li.finding, table.plan, table.maxes, table.figures-table, .how-to-read div, .caution, tr { break-inside: avoid; }
               table.index { font-size: 9.5pt; }
               table.index .path { font-size: 8pt; overflow-wrap: anywhere; }
               .keep { break-inside: avoid; }

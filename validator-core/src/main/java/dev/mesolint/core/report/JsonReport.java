@@ -5,6 +5,7 @@ import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.finding.Subject;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
@@ -84,10 +85,32 @@ public final class JsonReport implements ReportWriter {
         input.options().helpUri(f.ruleId()).ifPresent(uri -> node.put("helpUri", uri));
         node.put("fingerprint", Fingerprints.hash(f));
         node.put("baselined", f.baselined());
+        node.put("endLine", f.location().endLine());
+        node.put("endColumn", f.location().endColumn());
+        facts(node, f);
         f.waiver().ifPresent(w -> node.putObject("waiver").put("reason", w.reason())
                 .put("line", w.location().line()).put("column", w.location().column())
                 .put("wholeFile", w.wholeFile()));
         return node;
+    }
+
+    /** The finding's data besides its words: subject, measure and applicable edit, each only when known. */
+    private static void facts(ObjectNode node, Finding f) {
+        Subject s = f.subject();
+        if (!s.equals(Subject.NONE)) {
+            ObjectNode subject = node.putObject("subject");
+            Optional.ofNullable(s.muscle()).ifPresent(m -> subject.put("muscle", m));
+            Optional.ofNullable(s.exercise()).ifPresent(e -> subject.put("exercise", e));
+            Optional.ofNullable(s.day()).ifPresent(d -> subject.put("day", d));
+            if (!s.weeks().isEmpty()) {
+                ArrayNode weeks = subject.putArray("weeks");
+                s.weeks().forEach(weeks::add);
+            }
+        }
+        f.measure().ifPresent(m -> node.putObject("measure").put("value", m.value()).put("limit", m.limit())
+                .put("unit", m.unit()));
+        f.edit().ifPresent(e -> node.putObject("edit").put("pointer", e.pointer()).put("key", e.key())
+                .put("text", e.text()).put("line", e.location().line()).put("column", e.location().column()));
     }
 
     /** The programme object of the {@code metrics} list. */

@@ -6,6 +6,7 @@ import dev.mesolint.core.rule.RuleDefinition;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -45,10 +46,25 @@ public final class RunReports {
         return format == ReportFormat.HTML || format == ReportFormat.HTML_SHEET || format == ReportFormat.JSON;
     }
 
-    /** Writes {@code input} to every target. */
+    /**
+     * Writes {@code input} to every target. A target that fails does not stop the others: after all were tried, one
+     * exception names every failed target, with each failure attached as suppressed.
+     */
     public static void writeAll(ReportInput input, List<ReportTarget> targets) throws IOException {
+        List<String> failed = new ArrayList<>();
+        List<Exception> causes = new ArrayList<>();
         for (ReportTarget target : targets) {
-            ReportFiles.write(input, target);
+            try {
+                ReportFiles.write(input, target);
+            } catch (IOException | RuntimeException e) {
+                failed.add("the " + target.format().id() + " report " + target.path() + " (" + e.getMessage() + ")");
+                causes.add(e);
+            }
+        }
+        if (!failed.isEmpty()) {
+            IOException all = new IOException("cannot write " + String.join("; ", failed));
+            causes.forEach(all::addSuppressed);
+            throw all;
         }
     }
 }

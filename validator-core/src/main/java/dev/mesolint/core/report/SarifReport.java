@@ -12,6 +12,7 @@ import java.io.IOException;
 import java.io.Writer;
 import java.net.URI;
 import java.net.URISyntaxException;
+import java.util.List;
 import java.util.Locale;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -29,6 +30,21 @@ public final class SarifReport implements ReportWriter {
     /** The key of our hash in {@code partialFingerprints}; versioned so that a new hash can sit beside the old. */
     static final String FINGERPRINT_KEY = "mesolintFingerprint/v1";
 
+    private final List<Finding> absent;
+
+    /** The run's findings, each {@code new} or (held by a baseline) {@code unchanged}. */
+    public SarifReport() {
+        this(List.of());
+    }
+
+    /**
+     * The run's findings, and after them {@code absent}: findings of an earlier run that this one no longer has,
+     * reported with {@code baselineState: absent} (a review of a change lists what it resolved).
+     */
+    public SarifReport(List<Finding> absent) {
+        this.absent = List.copyOf(absent);
+    }
+
     @Override
     public void write(ReportInput input, Writer out) throws IOException {
         ObjectNode log = JsonText.object();
@@ -45,8 +61,9 @@ public final class SarifReport implements ReportWriter {
             input.options().branch().ifPresent(b -> vcs.put("branch", b));
             vcs.putObject("mappedTo").put("uriBaseId", SRCROOT);
         });
+        // No "uri": the checkout's absolute path would leak the machine's layout into code-scanning uploads; the
+        // consumer supplies the root (SARIF 2.1.0, 3.14.14: a base id without a uri is resolved by the consumer).
         run.putObject("originalUriBaseIds").putObject(SRCROOT)
-                .put("uri", directoryUri(input))
                 .putObject("description").put("text", "The folder that the checked programme paths are relative to.");
         ArrayNode results = run.putArray("results");
         SourceLines sources = new SourceLines(input.root());
@@ -56,6 +73,10 @@ public final class SarifReport implements ReportWriter {
                     results.add(result(input, f, sources));
                 }
             }
+        }
+        // Resolved findings are located in the base revision's files, which are not on disk: no snippets.
+        for (Finding f : absent) {
+            results.add(result(input, f, SourceLines.none()).put("baselineState", "absent"));
         }
         run.put("columnKind", "unicodeCodePoints");
         ObjectNode properties = run.putObject("properties");

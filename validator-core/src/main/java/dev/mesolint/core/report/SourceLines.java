@@ -24,6 +24,11 @@ final class SourceLines {
         this.root = root;
     }
 
+    /** No snippets: for findings whose files are not on disk as they were (a base revision's, say). */
+    static SourceLines none() {
+        return new SourceLines(null);
+    }
+
     /** A node spanning many lines is quoted by its first ones. */
     private static final int MAX_LINES = 10;
 
@@ -47,6 +52,9 @@ final class SourceLines {
     }
 
     private List<String> read(String shownPath) {
+        if (root == null) {
+            return List.of();
+        }
         try {
             Path file = root.resolve(shownPath).normalize();
             if (!Files.isRegularFile(file) || Files.size(file) > 4L * 1024 * 1024) {

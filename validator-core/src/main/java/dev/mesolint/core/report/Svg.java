@@ -41,6 +41,13 @@ final class Svg {
         return close("line", tooltip);
     }
 
+    /** A circle; {@code tooltip} (may be null) becomes its {@code <title>}. */
+    Svg circle(double cx, double cy, double r, String cssClass, String tooltip) {
+        out.append("<circle cx=\"").append(Html.px(cx)).append("\" cy=\"").append(Html.px(cy)).append("\" r=\"")
+                .append(Html.px(r)).append("\" class=\"").append(cssClass).append('"');
+        return close("circle", tooltip);
+    }
+
     /** Text; {@code anchor} is start, middle or end. */
     Svg text(double x, double y, String text, String cssClass, String anchor) {
         out.append("<text x=\"").append(Html.px(x)).append("\" y=\"").append(Html.px(y)).append("\" class=\"")

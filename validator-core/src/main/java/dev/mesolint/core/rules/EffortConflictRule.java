@@ -75,7 +75,7 @@ public final class EffortConflictRule implements Rule {
             SetMetrics set = group.first();
             EffortAgreement agreement = set.agreement();
             Severity severity = agreement.status() == AgreementStatus.INFEASIBLE ? Severity.ERROR : context.severity();
-            group.add(found, severity, group.label() + ": " + problem(set, relation), fix(set, relation));
+            group.add(found, severity, group.label() + ": " + problem(set, relation), fix(context, set, relation));
         }
         found.report(context);
     }
@@ -117,7 +117,7 @@ public final class EffortConflictRule implements Rule {
         };
     }
 
-    private static String fix(SetMetrics set, OneRepMaxRelation relation) {
+    private static String fix(RuleContext context, SetMetrics set, OneRepMaxRelation relation) {
         SetPrescription p = set.prescription();
         EffortAgreement a = set.agreement();
         double reserve = p.rir().isPresent() || p.rpe().isPresent() ? leastStated(p) : 0;
@@ -129,13 +129,22 @@ public final class EffortConflictRule implements Rule {
                 yield "load: " + Relations.loadFor(relation, p.reps().max() + reserve) + " for " + target
                         + ", or reps: " + reps + " at this load";
             }
-            case MISLABELLED -> "load: " + Relations.loadFor(relation, set.reps() + a.statedRir().getAsDouble())
-                    + " to leave " + Texts.num(a.statedRir().getAsDouble()) + " in reserve, or rir: "
-                    + Math.round(a.impliedRir().getAsDouble()) + " if the lighter load is meant";
+            case MISLABELLED -> heavier(context, set, relation)
+                    ? "load: " + Relations.loadFor(relation, set.reps() + a.statedRir().getAsDouble())
+                            + " to leave " + Texts.num(a.statedRir().getAsDouble()) + " in reserve, or rir: "
+                            + Math.round(a.impliedRir().getAsDouble()) + " if the lighter load is meant"
+                    : "write the reserve this load leaves, rir: " + Math.round(a.impliedRir().getAsDouble())
+                            + " (the athlete's cap or a novice's limit on this lift keeps the load down)";
             case RIR_RPE_DIFFER -> "rpe: " + Texts.num(10 - p.rir().orElseThrow().midpoint()) + " to agree with rir: "
                     + p.rir().orElseThrow() + ", or state one of them and remove the other";
             case AGREE, NOT_CHECKED -> throw new IllegalStateException("not a conflict: " + a.status());
         };
+    }
+
+    /** True when the load the stated reserve asks for stays under the athlete's caps and a novice's limit. */
+    private static boolean heavier(RuleContext context, SetMetrics set, OneRepMaxRelation relation) {
+        double share = Relations.shareFor(relation, set.reps() + set.agreement().statedRir().getAsDouble());
+        return !LoadCeilings.over(context, set.exerciseId(), Math.floor(share * 1000 / 25) * 2.5 / 100);
     }
 
     /** The least reserve the set states: its RIR's lower end, else its RPE read as RIR. */

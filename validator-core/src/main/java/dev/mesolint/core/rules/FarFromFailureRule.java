@@ -2,6 +2,7 @@ package dev.mesolint.core.rules;
 
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.EffortSource;
+import dev.mesolint.core.model.OneRepMaxRelation;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
@@ -80,11 +81,25 @@ public final class FarFromFailureRule implements Rule {
         found.report(context);
     }
 
+    /**
+     * A load that leaves about 2 in reserve; where that passes the athlete's cap or a novice's limit on a
+     * high-skill lift, the fix keeps the load and offers more reps instead, in words (no edit would hold).
+     */
+    private static String heavierLoad(RuleContext context, SetMetrics set) {
+        OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
+        double share = Relations.shareFor(relation, set.reps() + 2);
+        if (!LoadCeilings.over(context, set.exerciseId(), Math.floor(share * 1000 / 25) * 2.5 / 100)) {
+            return "load: " + Relations.loadFor(relation, set.reps() + 2) + " for " + Texts.num(set.reps())
+                    + " reps at about 2 in reserve (a heavier load)";
+        }
+        double reps = Math.max(set.reps(), Math.floor(set.agreement().repsToFailure().orElse(set.reps()) - 2));
+        return "keep the load, which the athlete's cap or a novice's limit on this lift holds down, and do about "
+                + Texts.num(reps) + " reps to leave about 2 in reserve, or write these as warm-up sets";
+    }
+
     private static String fix(RuleContext context, SetMetrics set) {
         return switch (set.effortSource()) {
-            case LOAD -> "load: "
-                    + Relations.loadFor(context.metrics().parameters().oneRepMaxRelation(), set.reps() + 2) + " for "
-                    + Texts.num(set.reps()) + " reps at about 2 in reserve (a heavier load)";
+            case LOAD -> heavierLoad(context, set);
             case RPE -> "rpe: 8 with a load that leaves about two reps in reserve, or write them as warm-up sets";
             default -> "rir: 2 with a load that leaves about two reps in reserve, or write them as warm-up sets";
         };

@@ -30,12 +30,14 @@ public final class Durations {
         } else if ((m = MINUTES.matcher(s)).matches()) {
             result = ofSeconds(Double.parseDouble(m.group(1)) * 60);
         } else if ((m = CLOCK.matcher(s)).matches()) {
-            int seconds = Integer.parseInt(m.group(2));
+            int seconds = WholeNumbers.parse(m.group(2), 99, text, HINT);
             if (seconds >= 60) {
                 throw new InvalidValueException("'" + text + "' has " + seconds + " seconds after the colon",
                         "seconds after the colon run from 00 to 59, e.g. 2:30");
             }
-            result = Duration.ofSeconds(Long.parseLong(m.group(1)) * 60 + seconds);
+            // Over an hour is refused below; the cap keeps a long minute count from overflowing first.
+            int minutes = WholeNumbers.parse(m.group(1), 24 * 60, text, "a rest is at most an hour, e.g. 2:30");
+            result = Duration.ofSeconds(minutes * 60L + seconds);
         } else if (s.matches("\\d+(\\.\\d+)?")) {
             throw new InvalidValueException("'" + text + "' has no unit", "write " + s + "s or " + s + "min");
         } else {

@@ -42,7 +42,7 @@ public record RepTarget(int min, int max, boolean amrap) {
             return AMRAP;
         }
         if (s.matches("\\d+")) {
-            return exactly(checked(text, Integer.parseInt(s)));
+            return exactly(checked(text, WholeNumbers.parse(s, Integer.MAX_VALUE, text, HINT)));
         }
         Matcher floor = AT_LEAST.matcher(s);
         if (floor.matches()) {
@@ -50,8 +50,8 @@ public record RepTarget(int min, int max, boolean amrap) {
         }
         Matcher m = RANGE.matcher(s);
         if (m.matches()) {
-            int lo = checked(text, Integer.parseInt(m.group(1)));
-            int hi = checked(text, Integer.parseInt(m.group(2)));
+            int lo = checked(text, WholeNumbers.parse(m.group(1), Integer.MAX_VALUE, text, HINT));
+            int hi = checked(text, WholeNumbers.parse(m.group(2), Integer.MAX_VALUE, text, HINT));
             if (hi <= lo) {
                 throw new InvalidValueException("rep range '" + text + "' must go from fewer to more reps",
                         "write the lower number first, e.g. " + Math.min(lo, hi) + "-" + Math.max(lo, hi));

@@ -1,10 +1,13 @@
 package dev.mesolint.core.yaml;
 
+import dev.mesolint.core.source.FileRefusedException;
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.source.SafeFiles;
 import java.io.IOException;
 import java.io.StringReader;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
+import java.nio.charset.Charset;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -36,10 +39,24 @@ public final class LocatedYamlReader {
         this.limits = limits;
     }
 
-    /** Reads a file; its size is checked before it is read, so a huge file costs nothing. */
+    /**
+     * Reads a file; only a regular file is opened (a FIFO or device is refused before it can block or run on), and its
+     * size is checked before and while it is read, so a huge file costs nothing.
+     */
     public LocatedDocument read(Path file) throws IOException, YamlProblem {
+        String notRegular = SafeFiles.notRegular(file);
+        if (notRegular != null) {
+            throw new YamlProblem("cannot be read as YAML: " + notRegular,
+                    "point mesolint at a regular YAML file, or remove this entry", Location.START);
+        }
         checkSize(Files.size(file));
-        return read(Files.readAllBytes(file));
+        byte[] bytes;
+        try {
+            bytes = SafeFiles.readRegular(file, limits.maxFileBytes());
+        } catch (FileRefusedException e) {
+            throw new YamlProblem(e.getMessage(), e.hint(), Location.START);
+        }
+        return read(bytes);
     }
 
     /** Reads content already in memory (e.g. read once to hash it). */
@@ -103,18 +120,43 @@ public final class LocatedYamlReader {
     }
 
     private static String decode(byte[] bytes) throws YamlProblem {
+        Charset wide = wideEncoding(bytes);
+        if (wide != null) {
+            return decodeStrictly(bytes, wide);
+        }
         for (int i = 0; i < Math.min(bytes.length, 8192); i++) {
             if (bytes[i] == 0) {
                 throw new YamlProblem("this is a binary file, not YAML text",
                         "remove it from the programme folder or give it another extension", Location.START);
             }
         }
+        return decodeStrictly(bytes, StandardCharsets.UTF_8);
+    }
+
+    /** UTF-32 or UTF-16 when the file starts with its byte-order mark (YAML 1.2 allows both), else null. */
+    private static Charset wideEncoding(byte[] b) {
+        if (b.length >= 4 && (b[0] == 0 && b[1] == 0 && b[2] == (byte) 0xFE && b[3] == (byte) 0xFF)) {
+            return Charset.forName("UTF-32BE");
+        }
+        if (b.length >= 4 && (b[0] == (byte) 0xFF && b[1] == (byte) 0xFE && b[2] == 0 && b[3] == 0)) {
+            return Charset.forName("UTF-32LE");
+        }
+        if (b.length >= 2 && b[0] == (byte) 0xFE && b[1] == (byte) 0xFF) {
+            return StandardCharsets.UTF_16BE;
+        }
+        if (b.length >= 2 && b[0] == (byte) 0xFF && b[1] == (byte) 0xFE) {
+            return StandardCharsets.UTF_16LE;
+        }
+        return null;
+    }
+
+    private static String decodeStrictly(byte[] bytes, Charset charset) throws YamlProblem {
         try {
-            String text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+            String text = charset.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
             return text.startsWith("\uFEFF") ? text.substring(1) : text;
         } catch (CharacterCodingException e) {
-            throw new YamlProblem("the file is not UTF-8 text", "save it as UTF-8", Location.START);
+            throw new YamlProblem("the file is not " + charset.name() + " text", "save it as UTF-8", Location.START);
         }
     }
 

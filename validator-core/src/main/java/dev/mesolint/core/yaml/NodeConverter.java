@@ -28,7 +28,7 @@ import tools.jackson.databind.node.ObjectNode;
  */
 final class NodeConverter {
     private static final JsonNodeFactory JSON = JsonNodeFactory.instance;
-    private static final Pattern INTEGER = Pattern.compile("[-+]?(0|[1-9][0-9]{0,17})");
+    private static final Pattern INTEGER = Pattern.compile("[-+]?(0|[1-9][0-9]*)");
     private static final Pattern DECIMAL = Pattern.compile("[-+]?([0-9]+\\.[0-9]*|\\.[0-9]+)([eE][-+]?[0-9]+)?");
     private static final Set<Tag> STANDARD = Set.of(Tag.STR, Tag.INT, Tag.FLOAT, Tag.BOOL, Tag.NULL, Tag.TIMESTAMP,
             Tag.MAP, Tag.SEQ, Tag.MERGE, Tag.OMAP, Tag.PAIRS, Tag.SET);
@@ -150,7 +150,10 @@ final class NodeConverter {
                 break;
         }
         if (INTEGER.matcher(text).matches()) {
-            return JSON.numberNode(Long.parseLong(text.startsWith("+") ? text.substring(1) : text));
+            // Any length is a number (YAML 1.2 core schema); one too large for a long stays exact, for a located
+            // "out of range" rather than being taken for text.
+            java.math.BigInteger value = new java.math.BigInteger(text.startsWith("+") ? text.substring(1) : text);
+            return value.bitLength() < 64 ? JSON.numberNode(value.longValue()) : JSON.numberNode(value);
         }
         if (DECIMAL.matcher(text).matches()) {
             return JSON.numberNode(new java.math.BigDecimal(text));

@@ -33,9 +33,9 @@ import org.junit.jupiter.api.io.TempDir;
  * fixtures, removes its finding and raises no other (a fix must not break an athlete's constraint or trip another
  * rule).
  *
- * <p>A fix can be applied mechanically when it starts with {@code key: value} and the finding sits on that key (the
- * value written there is replaced), or with {@code add key: value} and the finding sits on the mapping that lacks
- * the key (a line is added).
+ * <p>A fix can be applied mechanically when the finding carries an edit of the value it sits on, or when its words
+ * start with {@code key: value} and the finding sits on that key (the value written there is replaced), or with
+ * {@code add key: value} and the finding sits on the mapping that lacks the key (a line is added).
  */
 class FixesThatHoldTests {
     private static final Path SAMPLES = Path.of("../sample-programs/broken").toAbsolutePath().normalize();
@@ -144,6 +144,9 @@ class FixesThatHoldTests {
      * key, or {@code add key: value} where it sits on the mapping that lacks it.
      */
     private static Optional<Edit> edit(Finding f) {
+        if (f.edit().isPresent() && f.edit().get().location().equals(f.location())) {
+            return Optional.of(new Edit(f.edit().get().key(), f.edit().get().text(), false));
+        }
         Matcher m = EDIT.matcher(f.fix());
         if (!m.find()) {
             return Optional.empty();

@@ -69,4 +69,24 @@ class SoundProgrammeTests {
                     file.displayPath() + " " + file.findings());
         }
     }
+
+    /**
+     * The acceptance bar of a sound programme: no error, at most 2 warnings and at most 5 info findings under the
+     * profile its goal selects (issue "findings a coach trusts": a checker that cries wolf gets switched off).
+     */
+    @Test
+    void eachSoundProgrammeStaysUnderTheNoiseBar() {
+        List<String> over = run.files().stream()
+                .filter(f -> count(f, Severity.ERROR) > 0 || count(f, Severity.WARNING) > 2
+                        || count(f, Severity.INFO) > 5)
+                .map(f -> f.displayPath() + " " + counts(f) + " " + f.active().stream()
+                        .filter(x -> x.severity() != Severity.INFO || count(f, Severity.INFO) > 5)
+                        .map(Finding::toString).toList())
+                .toList();
+        assertEquals(List.of(), over);
+    }
+
+    private static long count(FileReport file, Severity severity) {
+        return file.active().stream().filter(f -> f.severity() == severity).count();
+    }
 }

@@ -62,6 +62,19 @@ class FindingGroupsTests {
     }
 
     @Test
+    void theSubjectsWeeksAndDayWinOverTheMessage() {
+        FileReport loaded = ReportFixtures.check("sample-programs/programmes/minimal-30-minutes.yaml").files().get(0);
+        var structured = ReportFixtures.finding("volume-spike", Severity.WARNING, "a.yaml", 40, 13,
+                "/weeks/0/sessions/0/work/0", "a message that names no week")
+                .withFacts(dev.mesolint.core.finding.Facts.about(dev.mesolint.core.finding.Subject.NONE
+                        .withWeeks(List.of(3, 4)).withDay(1)));
+        FileReport file = new FileReport("a.yaml", loaded.programme(), loaded.profile(), List.of(structured));
+        FindingGroups.Group group = FindingGroups.of(file, file.findings()).get(0);
+        assertEquals(java.util.Set.of(3, 4), group.weeks());
+        assertEquals(1, group.day());
+    }
+
+    @Test
     void readsTheWeeksAMessageNamesFirst() {
         assertEquals(java.util.Set.of(3), FindingWeeks.of("chest, week 3: 16 hard sets, 2 x the mean of weeks 1-2"));
         assertEquals(java.util.Set.of(1, 2, 4, 5, 6), FindingWeeks.of("squat, weeks 1-2, 4-6 day 1: x"));

@@ -148,4 +148,26 @@ class HtmlPrescriptionTests {
                 "every week is printed in full: six weeks, one squat row each");
         assertTrue(sheet.contains("did not load, so it has no sheet"));
     }
+
+    @Test
+    void theStrengthViewShowsTopSetsMeanIntensityAndZonesAgainstPrilepin() {
+        String html = report(STRENGTH);
+        String view = html.substring(html.indexOf("<section class=\"strength\""));
+        view = view.substring(0, view.indexOf("</section>"));
+        // Week 1 squat: 4 x 5 at 80% of 140 kg: top set 80%, 112 kg -> 112.5 kg on plates (nearest, common practice);
+        // mean intensity 80%; 20 reps; volume load 20 x 112 kg = 2240 kg (the model's unrounded weight); all 20 reps
+        // at 80% or more are heavy reps.
+        assertTrue(view.contains("<tr><th scope=\"row\">1</th><td>4</td><td>20</td><td>80% · 112.5 kg</td>"
+                + "<td>80%</td><td>2240 kg</td><td>20</td></tr>"), view);
+        // Week 5: 3 x 3 at 90%: 126 kg is near-maximal, so down to 125 kg (common practice).
+        assertTrue(view.contains("<td>90% · 125 kg</td>"), view);
+        // Prilepin's table (from memory, as docs/model.md gives it): 80-90% holds 10-20 reps a session; week 1's
+        // 20 squat reps at 80% are inside, so not marked.
+        assertTrue(view.contains("Prilepin 10–20"));
+        assertTrue(view.contains("id=\"p1-intensity\""), "the range chart is drawn");
+        // Under the hypertrophy profile the zones are shown without Prilepin's ranges.
+        String hypertrophy = report("sample-programs/broken/constraint-load.yaml");
+        assertTrue(hypertrophy.contains("reps per intensity zone and session"));
+        assertFalse(hypertrophy.contains("Prilepin 10–20"));
+    }
 }

@@ -53,6 +53,31 @@ class JsonReportTests {
     }
 
     @Test
+    void findingsCarryTheirSubjectMeasureAndApplicableEdit() {
+        RunReport run = ReportFixtures.check("sample-programs");
+        JsonNode doc = json(ReportFixtures.input(run));
+        assertEquals(List.of(), violations(doc));
+        JsonNode rest = null;
+        for (JsonNode file : doc.get("files")) {
+            for (JsonNode f : file.get("findings")) {
+                if (f.get("ruleId").asString().equals("short-rest-compound") && rest == null) {
+                    rest = f;
+                }
+            }
+        }
+        assertTrue(rest != null, "a broken sample has a short compound rest");
+        // the hypertrophy profile's 2 min after compound sets: ACSM 2009 position stand (Ratamess et al.)
+        assertEquals(120, rest.at("/measure/limit").asDouble());
+        assertEquals("s", rest.at("/measure/unit").asString());
+        assertTrue(rest.at("/measure/value").asDouble() < 120, rest.toString());
+        assertTrue(rest.at("/subject/exercise").isString(), rest.toString());
+        assertTrue(rest.at("/subject/weeks").size() >= 1, rest.toString());
+        assertEquals("rest", rest.at("/edit/key").asString());
+        assertEquals(rest.get("line").asInt(), rest.at("/edit/line").asInt(), "the edit is at the finding's key");
+        assertTrue(rest.get("endColumn").asInt() > rest.get("column").asInt(), "the span covers the value");
+    }
+
+    @Test
     void carriesTheCautionAndTheFindingDetails() {
         RunReport run = ReportFixtures.handMadeRun(Severity.ERROR);
         String waivedPrint = run.files().get(0).waived().get(0).fingerprint();

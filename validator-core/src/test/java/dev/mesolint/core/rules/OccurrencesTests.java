@@ -49,8 +49,8 @@ class OccurrencesTests {
                 + "  - week: 2\n    repeat: 1\n  - week: 3\n    repeat: 1\n";
         List<Finding> found = RuleRun.defaults().findings(dir, text, HighRepFatigueRule.ID);
         assertEquals(List.of("barbell-back-squat, weeks 1-3 day 1, sets 1-3: 20 reps at RIR 1 is a 21-rep effort "
-                + "taken close to failure on a compound lift; the hypertrophy profile flags sets of 15 or more reps "
-                + "to failure taken to RIR 2 or closer"), messages(found));
+                + "taken close to failure on a compound lift; the hypertrophy profile flags compound sets of 15 or "
+                + "more reps to failure taken to RIR 2 or closer"), messages(found));
     }
 
     @Test
