@@ -39,11 +39,34 @@ fi
 rm -rf "$out"
 mkdir -p "$out"
 status=0
-for set in programmes broken; do
+# The SARIF of `mesolint diff`: a throwaway git repository holding the clean samples, with one rest shortened in
+# the work tree, so the log has a new finding (baselineState relative to the base revision) beside unchanged ones.
+review="$out/review-repo"
+mkdir -p "$review/programmes"
+cp sample-programs/programmes/*.yaml "$review/programmes/"
+printf 'root: true\n' >"$review/.mesolint.yaml"
+git -C "$review" init -q -b main
+git -C "$review" add -A
+git -C "$review" -c user.name=ci -c user.email=ci@invalid commit -q -m "samples"
+sed -i '0,/rest: 2min/s//rest: 75s/' "$review/programmes/upper-lower-hypertrophy.yaml"
+code=0
+(cd "$review" && java -jar "$repo/$jar" diff --base main --report "sarif=$out/review.sarif" programmes) \
+  >"$out/review.console.txt" || code=$?
+if [[ $code -gt 1 ]]; then
+  echo "sarif-validate: mesolint diff failed (exit $code)"; cat "$out/review.console.txt"; status=1
+fi
+sets=(programmes broken review)
+if [[ ! -f "$out/review.sarif" ]]; then
+  echo "sarif-validate: mesolint diff wrote no SARIF"; cat "$out/review.console.txt"; status=1; sets=(programmes broken)
+fi
+for set in "${sets[@]}"; do
   sarif="$out/$set.sarif"
   # Exit 1 means findings (the broken samples have them by design); 2 is a usage or internal error.
   code=0
-  java -jar "$jar" check --root "$repo" "sample-programs/$set" --report "sarif=$sarif" >"$out/$set.console.txt" || code=$?
+  if [[ $set != review ]]; then
+    java -jar "$jar" check --root "$repo" "sample-programs/$set" --report "sarif=$sarif" >"$out/$set.console.txt" \
+      || code=$?
+  fi
   if [[ $code -gt 1 ]]; then
     echo "sarif-validate: mesolint failed on sample-programs/$set (exit $code)"
     cat "$out/$set.console.txt"

@@ -22,6 +22,8 @@ public record GitHead(String revision, Optional<String> branch, Optional<String>
     private static final Pattern SHA = Pattern.compile("[0-9a-f]{40}");
     private static final Pattern ORIGIN = Pattern.compile("(?m)^\\[remote \"origin\"\\]\\s*$((?:\\n(?!\\[).*)*)");
     private static final Pattern URL = Pattern.compile("(?m)^\\s*url\\s*=\\s*(\\S+)\\s*$");
+    private static final Pattern SCP = Pattern.compile("(?:[^@/:]+@)?([^@/:]+\\.[^@/:]+):(?!//)(.+)");
+    private static final Pattern NETWORK = Pattern.compile("(?i)(https?|ssh|git|git\\+ssh)://[^/]+/");
 
     /** The head of the repository whose root is {@code root} ({@code .git} a folder, or a file as in worktrees). */
     public static Optional<GitHead> at(Path root) {
@@ -91,8 +93,22 @@ public record GitHead(String revision, Optional<String> branch, Optional<String>
             return Optional.empty();
         }
         Matcher url = URL.matcher(section.group(1));
+        return url.find() ? networkAddress(url.group(1)) : Optional.empty();
+    }
+
+    /**
+     * The origin as an absolute URI that names a server, without credentials: SARIF requires an absolute
+     * {@code repositoryUri}, and a local path or {@code file:} address would only leak this machine's layout.
+     * An scp-style address ({@code git@host:team/repo.git}) becomes {@code ssh://host/team/repo.git}.
+     */
+    static Optional<String> networkAddress(String origin) {
+        Matcher scp = SCP.matcher(origin);
+        String uri = scp.matches() ? "ssh://" + scp.group(1) + "/" + scp.group(2) : origin;
+        if (!NETWORK.matcher(uri).lookingAt()) {
+            return Optional.empty();
+        }
         // Credentials written into the address never go into a report.
-        return url.find() ? Optional.of(url.group(1).replaceFirst("^([a-z+]+://)[^/@]*@", "$1")) : Optional.empty();
+        return Optional.of(uri.replaceFirst("^([a-z+]+://)[^/@]*@", "$1"));
     }
 
     private static String read(Path file) throws IOException {

@@ -54,9 +54,11 @@ public final class SarifReport implements ReportWriter {
         run.set("tool", tool(input));
         run.putArray("invocations").add(invocation(input));
         run.putObject("automationDetails").put("id", "mesolint/check/" + input.options().revision().orElse(""));
-        input.options().revision().ifPresent(revision -> {
+        // SARIF requires an absolute repositoryUri: without a server address for the origin, no provenance at all
+        // (a file: URI of the checkout would leak the machine's layout into code-scanning uploads).
+        input.options().revision().filter(r -> input.options().repositoryUri().isPresent()).ifPresent(revision -> {
             ObjectNode vcs = run.putArray("versionControlProvenance").addObject();
-            vcs.put("repositoryUri", input.options().repositoryUri().orElse(directoryUri(input)));
+            vcs.put("repositoryUri", input.options().repositoryUri().orElseThrow());
             vcs.put("revisionId", revision);
             input.options().branch().ifPresent(b -> vcs.put("branch", b));
             vcs.putObject("mappedTo").put("uriBaseId", SRCROOT);
@@ -228,11 +230,6 @@ public final class SarifReport implements ReportWriter {
         } catch (URISyntaxException e) {
             throw new IllegalArgumentException("cannot express " + path + " as a URI", e);
         }
-    }
-
-    private static String directoryUri(ReportInput input) {
-        String uri = input.root().toUri().toString();
-        return uri.endsWith("/") ? uri : uri + "/";
     }
 
     /** {@code week-sequence} → {@code WeekSequence}: SARIF's readable rule name. */

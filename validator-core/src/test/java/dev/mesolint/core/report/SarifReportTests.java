@@ -175,6 +175,15 @@ class SarifReportTests {
     }
 
     @Test
+    void aRevisionWithoutAServerAddressGivesNoProvenance() {
+        ReportOptions options = ReportOptions.DEFAULTS.withGit(
+                Optional.of("0123456789abcdef0123456789abcdef01234567"), Optional.of("main"), Optional.empty());
+        JsonNode run = sarif(ReportFixtures.input(ReportFixtures.handMadeRun(Severity.ERROR)).withOptions(options))
+                .at("/runs/0");
+        assertTrue(run.path("versionControlProvenance").isMissingNode(), "no repositoryUri, no provenance entry");
+    }
+
+    @Test
     void helpLinksAndGitProvenanceAppearOnlyWhenTheFrontEndGivesThem() {
         ReportOptions options = ReportOptions.DEFAULTS.withHelpUriBase(Optional.of("https://docs.example.org/rules"))
                 .withGit(Optional.of("0123456789abcdef0123456789abcdef01234567"), Optional.of("main"),
