@@ -108,6 +108,15 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     boolean ignoreBaseline;
 
     /**
+     * A git revision (branch, tag or commit): only findings that are new relative to it count, with the baseline's
+     * safety policy. Needs the repository's history (in CI, a checkout with full depth).
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.newSince")
+    String newSince;
+
+    /**
      * Where the reports and the result cache are written.
      *
      * @since 0.1.0
@@ -170,10 +179,13 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         long started = System.nanoTime();
         CachedCheck.Outcome outcome = execution.check(useCache() && !figures
                 ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
+        if (newSince != null && !newSince.isBlank()) {
+            outcome = execution.newSince(outcome, newSince.trim());
+        }
         if (!targets.isEmpty()) {
             execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
                     outputDirectory.toPath(), !noReasons, !ignoreBaseline
-                    && prepared.workspace().baselineFile().isPresent());
+                    && prepared.workspace().baselineFile().isPresent() || newSince != null);
         }
         afterCheck(outcome, reportOnly);
     }

@@ -12,6 +12,10 @@ import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.review.ChangeReview;
+import dev.mesolint.core.review.NewSinceGate;
+import dev.mesolint.core.review.Review;
+import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.rules.InternalErrorRule;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -60,6 +64,22 @@ final class CheckExecution {
             // After the cache: it keeps the findings themselves, so editing the baseline never invalidates it.
             RunReport compared = Baseline.applyConfigured(prepared.workspace(), outcome.report());
             return new CachedCheck.Outcome(compared, outcome.reused(), outcome.checked(), outcome.unreadable());
+        } catch (ConfigProblem e) {
+            throw RunSettings.problem(e);
+        }
+    }
+
+    /**
+     * Holds the findings that revision {@code since} already had, with the baseline's safety policy (errors of the
+     * athlete-safety rules and findings of files that did not load, then or now, always count).
+     */
+    CachedCheck.Outcome newSince(CachedCheck.Outcome outcome, String since) throws MojoExecutionException {
+        try {
+            Review review = ChangeReview.run(new ReviewRequest(prepared.options(), prepared.request().inputs(),
+                    Optional.of(since), Optional.empty()), prepared.rules());
+            RunReport gated = new NewSinceGate(prepared.rules()).apply(outcome.report(), review);
+            log.info("mesolint: findings already present at " + since + " are held (newSince); new ones count");
+            return new CachedCheck.Outcome(gated, outcome.reused(), outcome.checked(), outcome.unreadable());
         } catch (ConfigProblem e) {
             throw RunSettings.problem(e);
         }

@@ -36,7 +36,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
 
     /** Everything a run needs, the cache key and, for the debug log, where each setting came from. */
     record Prepared(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, ConfigurationKey key,
-            List<String> sources) {
+            List<String> sources, RunOptions options) {
     }
 
     Prepared prepare() throws MojoExecutionException {
@@ -76,7 +76,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
             Workspace workspace = Workspace.open(options, rules);
             CheckRequest request = workspace.request(selected());
             return new Prepared(workspace, request, rules, ConfigurationKey.of(workspace, request, rules),
-                    SettingSources.describe(workspace, name -> "plugin parameter " + name));
+                    SettingSources.describe(workspace, name -> "plugin parameter " + name), options);
         } catch (ConfigProblem e) {
             throw problem(e);
         } catch (IOException e) {
