@@ -31,19 +31,6 @@ class CatalogueCommandTests {
         return new Run(exit, out.toString(), err.toString());
     }
 
-    private static final String CLUB = """
-            format: 1
-            exercises:
-              - id: harbour-sled-push
-                name: Harbourside sled push
-                kind: compound
-                pattern: squat
-                stability: stable
-                skill: low
-                muscles: {quadriceps: 1, glutes: 0.5}
-                regions: [knee, hip, ankle]
-            """;
-
     @Test
     void searchFindsEveryWordInIdsAndNames() {
         Run r = run("catalogue", "search", "bench", "press");
@@ -59,7 +46,7 @@ class CatalogueCommandTests {
     void theRepositorysCatalogueIsListedWithWhereItComesFrom() throws IOException {
         Files.writeString(root.resolve(".mesolint.yaml"), "root: true\ncatalogues: [catalogue/club.yaml]\n");
         Files.createDirectories(root.resolve("catalogue"));
-        Files.writeString(root.resolve("catalogue/club.yaml"), CLUB);
+        Files.writeString(root.resolve("catalogue/club.yaml"), ClubCatalogue.SLED_PUSH);
 
         Run r = run("catalogue", "search", "sled", "--root", root.toString());
 
@@ -95,7 +82,7 @@ class CatalogueCommandTests {
     void aCatalogueFileThatDoesNotLoadIsALocatedErrorAndTheRunSaysWhatItSkipped() throws IOException {
         Files.writeString(root.resolve(".mesolint.yaml"), "root: true\ncatalogues: [catalogue/club.yaml]\n");
         Files.createDirectories(root.resolve("catalogue"));
-        Files.writeString(root.resolve("catalogue/club.yaml"), CLUB.replace("kind: compound", "kind: compund"));
+        Files.writeString(root.resolve("catalogue/club.yaml"), ClubCatalogue.SLED_PUSH.replace("kind: compound", "kind: compund"));
 
         Run r = run("catalogue", "--root", root.toString());
 

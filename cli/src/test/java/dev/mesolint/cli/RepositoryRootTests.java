@@ -46,19 +46,6 @@ class RepositoryRootTests {
                         rest: 60s
             """;
 
-    private static final String CATALOGUE = """
-            format: 1
-            exercises:
-              - id: harbour-sled-push
-                name: Harbourside sled push
-                kind: compound
-                pattern: squat
-                stability: stable
-                skill: low
-                muscles: {quadriceps: 1, glutes: 0.5}
-                regions: [knee, hip, ankle]
-            """;
-
     private record Run(int exit, String out) {
     }
 
@@ -83,7 +70,7 @@ class RepositoryRootTests {
     void theSameRepositoryCheckedFromThreeFoldersGivesOneVerdict() throws Exception {
         Files.createDirectories(repo.resolve(".git"));
         write(".mesolint.yaml", "fail-on: warning\ncatalogues: [catalogue/club.yaml]\n");
-        write("catalogue/club.yaml", CATALOGUE);
+        write("catalogue/club.yaml", ClubCatalogue.SLED_PUSH);
         write("programmes/strength/block-1.yaml", PROGRAMME);
 
         Run fromRoot = runIn(repo, "check", "programmes");
@@ -104,7 +91,7 @@ class RepositoryRootTests {
     void rootTrueKeepsAProgrammeRepositoryInsideAnotherOneApart() throws Exception {
         Files.createDirectories(repo.resolve(".git"));
         write("clubs/harbourside/.mesolint.yaml", "root: true\ncatalogues: [catalogue/club.yaml]\n");
-        write("clubs/harbourside/catalogue/club.yaml", CATALOGUE);
+        write("clubs/harbourside/catalogue/club.yaml", ClubCatalogue.SLED_PUSH);
         write("clubs/harbourside/programmes/block-1.yaml", PROGRAMME);
 
         Run r = runIn(repo.resolve("clubs/harbourside/programmes"), "check", ".");

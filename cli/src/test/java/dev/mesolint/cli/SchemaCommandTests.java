@@ -26,18 +26,7 @@ class SchemaCommandTests {
     @Test
     void writesTheFourSchemasWithTheRepositorysExerciseIdsAndReadableMessages() throws IOException {
         Files.writeString(repo.resolve(".mesolint.yaml"), "root: true\ncatalogues: [club.yaml]\n");
-        Files.writeString(repo.resolve("club.yaml"), """
-                format: 1
-                exercises:
-                  - id: harbour-sled-push
-                    name: Harbourside sled push
-                    kind: compound
-                    pattern: squat
-                    stability: stable
-                    skill: low
-                    muscles: {quadriceps: 1, glutes: 0.5}
-                    regions: [knee, hip, ankle]
-                """);
+        Files.writeString(repo.resolve("club.yaml"), ClubCatalogue.SLED_PUSH);
         Path out = repo.resolve("schemas");
         int exit = MesolintCommand.execute(new String[] {"schema", "--root", repo.toString(), "--out", out.toString()},
                 new PrintWriter(new StringWriter()), new PrintWriter(new StringWriter()));
