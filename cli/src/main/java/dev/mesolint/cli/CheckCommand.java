@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.engine.RunProgress;
 import dev.mesolint.core.review.ChangeReview;
 import dev.mesolint.core.review.NewSinceGate;
 import dev.mesolint.core.review.Review;
@@ -157,8 +158,13 @@ final class CheckCommand implements Callable<Integer> {
             request = workspace.request(piped.isPresent() ? List.of() : paths);
             Checker built = new Checker(request, installed.rules());
             checker = built;
-            report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
-                    .orElseGet(built::run));
+            RunProgress progress = output.progress(cli.getErr());
+            try {
+                report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
+                        .orElseGet(() -> built.run(progress)));
+            } finally {
+                ProgressLine.finish(progress);
+            }
             empty = piped.isEmpty() && report.nothingChecked();
             hidden = report.hidden();
             built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
