@@ -15,26 +15,6 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** {@code check --cache}: the same verdict as a fresh run, with unchanged programmes reused. */
 class CheckCacheTests {
-    /** A 60 s rest after squats: one short-rest-compound warning under hypertrophy (rules.md: 2 min for compounds). */
-    private static final String SHORT_REST = """
-            # Invented demo programme of the fictional Harbourside Strength Club.
-            format: 1
-            programme:
-              id: harbour-cache-%s
-              level: intermediate
-              goal: hypertrophy
-            weeks:
-              - week: 1
-                sessions:
-                  - day: 1
-                    work:
-                      - exercise: barbell-back-squat
-                        sets: 4
-                        reps: 8
-                        rir: 2
-                        rest: %s
-            """;
-
     @TempDir
     Path root;
 
@@ -57,7 +37,7 @@ class CheckCacheTests {
     private void write(String name, String rest) throws IOException {
         Path file = root.resolve("programmes").resolve(name + ".yaml");
         Files.createDirectories(file.getParent());
-        Files.writeString(file, SHORT_REST.formatted(name, rest));
+        Files.writeString(file, SquatDay.resting("harbour-cache-" + name, rest));
     }
 
     @Test

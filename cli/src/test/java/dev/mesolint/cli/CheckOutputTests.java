@@ -26,24 +26,7 @@ class CheckOutputTests {
     Path root;
 
     /** A 60 s rest after squats: one short-rest-compound warning under hypertrophy. */
-    private static final String PROGRAMME = """
-            # Invented demo programme of the fictional Harbourside Strength Club.
-            format: 1
-            programme:
-              id: harbour-output
-              level: intermediate
-              goal: hypertrophy
-            weeks:
-              - week: 1
-                sessions:
-                  - day: 1
-                    work:
-                      - exercise: barbell-back-squat
-                        sets: 4
-                        reps: 8
-                        rir: 2
-                        rest: 60s
-            """;
+    private static final String PROGRAMME = SquatDay.resting("harbour-output", "60s");
 
     private record Run(int exit, String out, String err) {
     }
