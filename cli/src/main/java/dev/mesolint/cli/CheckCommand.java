@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.engine.RunProgress;
 import dev.mesolint.core.review.ChangeReview;
 import dev.mesolint.core.review.NewSinceGate;
 import dev.mesolint.core.review.Review;
@@ -11,7 +12,11 @@ import dev.mesolint.core.review.ReviewHtmlSection;
 import dev.mesolint.core.review.ReviewInput;
 import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.engine.CheckRequest;
+import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.cache.ConfigurationKey;
+import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.engine.Checker;
+import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
@@ -76,6 +81,9 @@ final class CheckCommand implements Callable<Integer> {
 
     @Mixin
     ConfigOptions options;
+
+    @Mixin
+    CacheOptions cache;
 
     @Mixin
     ConfigOptions.Catalogues catalogues;
@@ -155,13 +163,31 @@ final class CheckCommand implements Callable<Integer> {
                     Optional.ofNullable(baseline));
             workspace = Workspace.open(runOptions, installed.rules());
             request = workspace.request(piped.isPresent() ? List.of() : paths);
-            Checker built = new Checker(request, installed.rules());
-            checker = built;
-            report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
-                    .orElseGet(built::run));
+            Optional<String> uncached = cache.notUsed(reports, stdoutFormat);
+            if (piped.isEmpty() && uncached.isEmpty()) {
+                // Unchanged files cost one read and one hash; the checker is only built when some file changed.
+                checker = null;
+                report = cachedRun(workspace, request, installed, cli.getErr());
+            } else {
+                if (cache.enabled && !output.quiet) {
+                    cli.getErr().println("mesolint: cache not used: " + uncached.orElse("standard input is checked "
+                            + "afresh"));
+                }
+                Checker built = new Checker(request, installed.rules());
+                checker = built;
+                RunProgress progress = output.progress(cli.getErr());
+                try {
+                    report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
+                            .orElseGet(() -> built.run(progress)));
+                } finally {
+                    ProgressLine.finish(progress);
+                }
+            }
             empty = piped.isEmpty() && report.nothingChecked();
             hidden = report.hidden();
-            built.catalogueReports().forEach(bad -> cli.getErr().println("mesolint: catalogue "
+            report.files().stream().filter(f -> request.extraCatalogues().stream()
+                    .anyMatch(c -> ProgrammeFiles.display(request.root(), c).equals(f.displayPath())))
+                    .forEach(bad -> cli.getErr().println("mesolint: catalogue "
                     + SafeText.line(bad.displayPath()) + " did not load (see its findings): its exercises are unknown "
                     + "in this run"));
             if (!noBaseline) {
@@ -183,7 +209,10 @@ final class CheckCommand implements Callable<Integer> {
                 .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent() || review != null)
                 .withJunitFailAt(junitLevel).withGitAt(workspace.root());
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
-                .withReasons(!noReasons).withCatalogue(checker.catalogue());
+                .withReasons(!noReasons);
+        if (checker != null) {
+            coach = coach.withCatalogue(checker.catalogue());
+        }
         if (review != null) {
             coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(review, installed.rules(),
                     workspace.root(), !noReasons)));
@@ -225,6 +254,25 @@ final class CheckCommand implements Callable<Integer> {
             return MesolintCommand.EXIT_USAGE;
         }
         return report.failed() ? 1 : 0;
+    }
+
+    /** The run through the results cache; says on standard error how much it reused (unless quiet). */
+    private RunReport cachedRun(Workspace workspace, CheckRequest request, InstalledRules installed,
+            java.io.PrintWriter err) throws IOException {
+        Path file = cache.file(workspace.root());
+        ResultCache store = ResultCache.open(file, ConfigurationKey.of(workspace, request, installed.rules()));
+        CachedCheck.Outcome outcome = new CachedCheck(request, installed.rules()).run(Optional.of(store));
+        try {
+            store.save();
+        } catch (IOException e) {
+            err.println("mesolint: the cache could not be saved (" + SafeText.line(String.valueOf(e.getMessage()))
+                    + "); the results of this run are complete");
+        }
+        if (!output.quiet) {
+            err.println("mesolint: cache: " + outcome.reused() + " unchanged programme" + (outcome.reused() == 1 ? ""
+                    : "s") + " reused, " + outcome.checked() + " checked");
+        }
+        return outcome.report();
     }
 
     private Optional<Severity> level(String text, String option) {

@@ -19,6 +19,11 @@ final class OutputOptions {
         AUTO, ALWAYS, NEVER
     }
 
+    /** {@code --progress}: a progress line on standard error on a terminal, always, or never. */
+    enum ProgressMode {
+        AUTO, ALWAYS, NEVER
+    }
+
     @Option(names = "--format", paramLabel = "FORMAT",
             description = "What standard output carries: console (default), json, sarif, junit or html. With any "
                     + "but console, nothing else is printed there, so the output can be piped.")
@@ -33,6 +38,12 @@ final class OutputOptions {
             description = "Colour the console form: auto (on a terminal, unless the NO_COLOR environment variable is "
                     + "set), always or never. Default: ${DEFAULT-VALUE}.")
     ColorMode color;
+
+    @Option(names = "--progress", paramLabel = "WHEN", defaultValue = "auto",
+            description = "On runs over a second, keep one line on standard error up to date (files checked of the "
+                    + "total, findings so far): auto (on a terminal, unless --quiet), always or never. "
+                    + "Default: ${DEFAULT-VALUE}.")
+    ProgressMode progress;
 
     /**
      * The one format standard output carries: {@code --format}, else that of a report sent to {@code -}, else the
@@ -51,6 +62,11 @@ final class OutputOptions {
             chosen = Optional.of(f);
         }
         return chosen.orElse(ReportFormat.CONSOLE);
+    }
+
+    /** The progress line these options want, drawn on {@code err}. */
+    dev.mesolint.core.engine.RunProgress progress(java.io.PrintWriter err) {
+        return ProgressLine.choose(progress, quiet, System.console() != null, err);
     }
 
     /** The console form as these options want it; {@code showWaived} from the command. */

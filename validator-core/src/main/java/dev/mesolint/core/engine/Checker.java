@@ -27,6 +27,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * Checks programme files: read safely, validate against the schema, bind, expand weeks, run the rules.
@@ -74,9 +75,22 @@ public final class Checker {
 
     /** Checks every programme file found under {@code request.inputs()}. */
     public RunReport run() {
+        return run(RunProgress.NONE);
+    }
+
+    /** Checks every programme file found under {@code request.inputs()}, telling {@code progress} after each file. */
+    public RunReport run(RunProgress progress) {
         ProgrammeFiles.Discovery found = discover();
         List<FileReport> reports = new ArrayList<>(catalogueReports);
-        reports.addAll(found.programmes().parallelStream().map(this::checkFile).toList());
+        int total = found.programmes().size();
+        AtomicInteger done = new AtomicInteger();
+        AtomicInteger findings = new AtomicInteger();
+        reports.addAll(found.programmes().parallelStream().map(file -> {
+            FileReport report = checkFile(file);
+            int seen = findings.addAndGet(report.findings().size());
+            progress.fileChecked(done.incrementAndGet(), total, seen);
+            return report;
+        }).toList());
         return RunReport.of(reports, request.failOn(), found, refusedReports(found), request.root());
     }
 

@@ -11,6 +11,8 @@ import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.reference.FixtureVerdict;
+import dev.mesolint.core.reference.RuleFixtures;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RulePack;
 import dev.mesolint.core.rules.BuiltInRules;
@@ -83,6 +85,31 @@ class RulePackTests {
         assertEquals(List.of(), new Checker(configured.request(List.of(file)), installed.rules()).run().active());
         assertEquals(Severity.INFO, configured.profiles().get("harbourside-classes")
                 .settings(installed.find(ExerciseCountRule.ID).orElseThrow()).severity());
+    }
+
+    @Test
+    void thePublicFixtureHarnessChecksAPacksOwnFixtures() throws Exception {
+        InstalledRules installed = InstalledRules.discover(getClass().getClassLoader());
+        List<FixtureVerdict> verdicts = RuleFixtures.check(Path.of("src/test/resources/pack-fixtures"),
+                installed.rules());
+        assertEquals(2, verdicts.size());
+        verdicts.forEach(v -> assertTrue(v.holds(), v.explain()));
+    }
+
+    @Test
+    void theHarnessFailsAFixtureWhoseMarkersAreWrong() throws Exception {
+        InstalledRules installed = InstalledRules.discover(getClass().getClassLoader());
+        Path folder = root.resolve("club-exercise-count");
+        Files.createDirectories(folder);
+        // A "passing" fixture that breaks the rule, and marks nothing: two problems, both named.
+        Files.copy(Path.of("src/test/resources/pack-fixtures/club-exercise-count/failing.yaml"),
+                folder.resolve("passing.yaml"));
+        Files.writeString(folder.resolve("passing.yaml"), Files.readString(folder.resolve("passing.yaml"))
+                .replace(" # expect: club-exercise-count", ""));
+        FixtureVerdict verdict = RuleFixtures.check(root, installed.rules()).get(0);
+        assertEquals(List.of("unexpected: line  10 club-exercise-count"), verdict.problems());
+        assertThrows(IOException.class, () -> RuleFixtures.check(root.resolve("nowhere"), installed.rules()),
+                "a missing fixture folder cannot pass unseen");
     }
 
     /** A pack that reuses a built-in id. */

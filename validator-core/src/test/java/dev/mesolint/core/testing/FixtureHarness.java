@@ -3,11 +3,9 @@ package dev.mesolint.core.testing;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import dev.mesolint.core.engine.FileReport;
-import dev.mesolint.core.finding.Finding;
-import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.reference.ExampleRun;
+import dev.mesolint.core.reference.FixtureVerdict;
 import dev.mesolint.core.reference.RuleExample;
-import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -15,7 +13,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 
 /**
  * Runs fixture programmes ({@code src/test/resources/fixtures/<rule-id>/{failing,passing}*.yaml}) and compares
@@ -48,35 +45,9 @@ public final class FixtureHarness {
 
     /** Fails unless the findings in {@code report} are exactly the marked ones (line, rule, waived, count). */
     public static void verify(RuleExample example, FileReport report) {
-        Map<String, Integer> expected = new TreeMap<>();
-        example.expected().forEach(e -> expected.merge(key(e.line(), e.ruleId(), e.waived()), e.count(),
-                Integer::sum));
-        Map<String, Integer> actual = new TreeMap<>();
-        List<Finding> findings = report.findings().stream().filter(f -> f.severity() != Severity.OFF).toList();
-        findings.forEach(f -> actual.merge(key(f.location().line(), f.ruleId(), f.waived()), 1, Integer::sum));
-        if (expected.equals(actual)) {
-            return;
+        FixtureVerdict verdict = FixtureVerdict.of(example, report);
+        if (!verdict.holds()) {
+            fail(verdict.explain());
         }
-        StringBuilder why = new StringBuilder(example.file().getFileName() + " in " + example.ruleId()
-                + ": findings differ from the # expect: markers\n");
-        expected.forEach((k, n) -> {
-            int got = actual.getOrDefault(k, 0);
-            if (got < n) {
-                why.append("  missing:    ").append(k).append(n - got > 1 ? " x" + (n - got) : "").append('\n');
-            }
-        });
-        actual.forEach((k, n) -> {
-            int want = expected.getOrDefault(k, 0);
-            if (n > want) {
-                why.append("  unexpected: ").append(k).append(n - want > 1 ? " x" + (n - want) : "").append('\n');
-            }
-        });
-        why.append("  all findings:\n");
-        findings.forEach(f -> why.append("    ").append(ConsoleReport.line(f)).append('\n'));
-        fail(why.toString());
-    }
-
-    private static String key(int line, String rule, boolean waived) {
-        return String.format("line %3d %s%s", line, rule, waived ? " (waived)" : "");
     }
 }
