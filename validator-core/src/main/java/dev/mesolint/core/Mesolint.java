@@ -7,9 +7,6 @@ import java.util.Properties;
 
 /** Facts about this build of mesolint shared by every front end and report. */
 public final class Mesolint {
-    /** Where the rule reference lives; reports link rule ids to it. */
-    public static final String INFORMATION_URI = "https://mesolint.dev";
-
     /** The caution every front end and report carries. */
     public static final String CAUTION = "mesolint applies general, population-level training guidance; it is not a "
             + "medical assessment. Screen athletes before training (PAR-Q+ or a physician), and defer to the athlete's "

@@ -38,6 +38,16 @@ final class FindingsView {
         page.append("</section>\n");
     }
 
+    /** The rule id, linked only when the front end names where the rule reference is published. */
+    private void rule(StringBuilder page, String ruleId) {
+        String id = Html.esc(ruleId);
+        input.options().helpUri(ruleId).ifPresentOrElse(
+                uri -> page.append("<a class=\"rule\" href=\"").append(Html.esc(uri)).append("\">").append(id)
+                        .append("</a>"),
+                () -> page.append("<span class=\"rule\" title=\"mesolint explain ").append(id).append("\">")
+                        .append(id).append("</span>"));
+    }
+
     private void finding(StringBuilder page, Finding f) {
         String severity = f.severity().label();
         page.append("<li class=\"finding ").append(severity).append(f.waived() ? " is-waived" : "")
@@ -50,8 +60,8 @@ final class FindingsView {
             page.append("<span class=\"badge ").append(severity).append("\">").append(HtmlMarks.glyph(f.severity()))
                     .append(' ').append(severity).append("</span>");
         }
-        page.append("<a class=\"rule\" href=\"").append(Html.esc(RuleDocs.uri(f.ruleId()))).append("\">")
-                .append(Html.esc(f.ruleId())).append("</a>")
+        rule(page, f.ruleId());
+        page
                 .append("<a class=\"where\" href=\"").append(Html.esc(links.to(f.file(), f.location().line())))
                 .append("\">").append(Html.esc(f.file() + ":" + f.location().line() + ":" + f.location().column()))
                 .append("</a>");

@@ -32,9 +32,8 @@ final class HtmlPage {
     static void footer(StringBuilder page, boolean script) {
         page.append("<footer>\n");
         caution(page, "caution-end");
-        page.append("<p>Written by mesolint ").append(Html.esc(Mesolint.version())).append(" · <a href=\"")
-                .append(Html.esc(Mesolint.INFORMATION_URI)).append("\">").append(Html.esc(Mesolint.INFORMATION_URI))
-                .append("</a></p>\n</footer>\n");
+        page.append("<p>Written by mesolint ").append(Html.esc(Mesolint.version()))
+                .append(" · <code>mesolint explain RULE</code> prints a rule's reference</p>\n</footer>\n");
         if (script) {
             page.append("<script>").append(HtmlScript.JS).append("</script>\n");
         }

@@ -21,7 +21,7 @@ import tools.jackson.databind.node.ObjectNode;
  */
 public final class JsonReport implements ReportWriter {
     /** The schema's {@code $id}; documents name it in {@code $schema}. */
-    public static final String SCHEMA_ID = Mesolint.INFORMATION_URI + "/schema/report.schema.json";
+    public static final String SCHEMA_ID = "urn:mesolint:schema:report:1";
     /** Raised when the document's shape changes incompatibly. */
     public static final int FORMAT_VERSION = 1;
 
