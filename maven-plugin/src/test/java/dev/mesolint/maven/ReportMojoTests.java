@@ -39,6 +39,30 @@ class ReportMojoTests {
     }
 
     @Test
+    void withThePomInASubfolderEveryReportNamesPathsFromTheRepositoryRoot() throws Exception {
+        Files.createDirectories(dir.resolve(".git")); // the repository root, as git marks it
+        MojoFixture repo = new MojoFixture(dir)
+                .programme("misspelt.yaml", MojoFixture.PROGRAMME.replace("barbell-bench", "barbel-bench"));
+        ReportMojo mojo = repo.report();
+        Path build = Files.createDirectories(dir.resolve("build/programme-checks"));
+        mojo.basedir = build.toFile(); // the pom sits two folders below the root
+        mojo.outputDirectory = build.resolve("target/mesolint").toFile();
+        mojo.reports = List.of("console", "sarif", "json", "junit");
+        mojo.execute();
+
+        Path out = build.resolve("target/mesolint");
+        String sarif = Files.readString(out.resolve("mesolint.sarif"));
+        assertTrue(sarif.contains("\"uri\" : \"programmes/misspelt.yaml\"")
+                || sarif.contains("\"uri\":\"programmes/misspelt.yaml\""), sarif);
+        for (String name : List.of("mesolint.txt", "mesolint.sarif", "mesolint.json", "TEST-mesolint.xml")) {
+            String text = Files.readString(out.resolve(name));
+            assertTrue(text.contains("programmes/misspelt.yaml"), name + " names the file from the root");
+            assertFalse(text.contains("../programmes") || text.contains("..\\programmes"),
+                    name + " names no path relative to the pom's folder");
+        }
+    }
+
+    @Test
     void anUnknownFormatIsAnExecutionErrorBeforeAnyWork() throws Exception {
         MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
         ReportMojo mojo = repo.report();
