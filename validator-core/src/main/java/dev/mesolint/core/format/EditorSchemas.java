@@ -5,6 +5,7 @@ import dev.mesolint.core.catalogue.Exercise;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
 import java.util.Collection;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
@@ -23,6 +24,11 @@ import tools.jackson.databind.node.ObjectNode;
  */
 public final class EditorSchemas {
     /** The file names written, in order. */
+    /** Up to this many allowed values are named in a message; longer lists are pointed to instead. */
+    private static final int ENUM_LISTED = 8;
+    private static final java.util.Set<String> NAMED_SCHEMAS = java.util.Set.of("properties", "$defs",
+            "patternProperties", "dependentSchemas");
+
     public static final List<String> FILES = List.of("programme.schema.json", "catalogue.schema.json",
             "configuration.schema.json", "profile.schema.json");
 
@@ -89,7 +95,43 @@ public final class EditorSchemas {
                 }
             }
         }
+        constrainedValues(schema);
         return schema;
+    }
+
+    /**
+     * A message on every enum or pattern not yet covered, anywhere in the schema: editors otherwise show the raw
+     * regex or the whole list of allowed values.
+     */
+    private static void constrainedValues(JsonNode node) {
+        if (node instanceof ObjectNode object) {
+            if ((object.has("enum") || object.has("pattern")) && !object.has("errorMessage")) {
+                object.put("errorMessage", messageFor(object));
+            }
+            for (Map.Entry<String, JsonNode> child : object.properties()) {
+                if (NAMED_SCHEMAS.contains(child.getKey()) && child.getValue() instanceof ObjectNode named) {
+                    // A map from names to schemas: its keys are names (a property may be called "pattern").
+                    named.properties().forEach(entry -> constrainedValues(entry.getValue()));
+                } else {
+                    constrainedValues(child.getValue());
+                }
+            }
+        } else if (node instanceof ArrayNode array) {
+            array.forEach(EditorSchemas::constrainedValues);
+        }
+    }
+
+    private static String messageFor(ObjectNode constrained) {
+        if (constrained.has("description")) {
+            return constrained.get("description").asString();
+        }
+        if (constrained.get("enum") instanceof ArrayNode values && values.size() <= ENUM_LISTED) {
+            List<String> names = new ArrayList<>();
+            values.forEach(v -> names.add(v.asString()));
+            return "one of: " + String.join(", ", names);
+        }
+        return constrained.has("enum") ? "not a value this field accepts: see the format documentation"
+                : "not in the form this field expects: see the format documentation";
     }
 
     private static ObjectNode load(String name) {
