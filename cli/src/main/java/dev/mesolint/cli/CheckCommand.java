@@ -13,6 +13,7 @@ import dev.mesolint.core.review.ReviewInput;
 import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.review.ChangedProgrammes;
 import dev.mesolint.core.cache.ConfigurationKey;
 import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.engine.Checker;
@@ -35,8 +36,10 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -104,6 +107,12 @@ final class CheckCommand implements Callable<Integer> {
                     + "constraints among them) and findings in files that did not load, at REV or now, always count.")
     String newSince;
 
+    @Option(names = "--changed", paramLabel = "REV", arity = "0..1", fallbackValue = "",
+            description = "Check only the programmes added, edited or renamed since git revision REV (default: where "
+                    + "this branch left the default branch, else HEAD), uncommitted and untracked files included. A "
+                    + "change to .mesolint.yaml, a catalogue or anything under .mesolint/ checks every programme.")
+    String changed;
+
     @Option(names = "--no-baseline", description = "Ignore the configuration's baseline: count every finding.")
     boolean noBaseline;
 
@@ -162,7 +171,15 @@ final class CheckCommand implements Callable<Integer> {
             RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
                     Optional.ofNullable(baseline));
             workspace = Workspace.open(runOptions, installed.rules());
-            request = workspace.request(piped.isPresent() ? List.of() : paths);
+            List<Path> inputs = piped.isPresent() ? List.of() : paths;
+            if (changed != null) {
+                Optional<List<Path>> selected = changedOnly(workspace, inputs, piped.isPresent(), cli);
+                if (selected.isEmpty()) {
+                    return 0;
+                }
+                inputs = selected.get();
+            }
+            request = workspace.request(inputs);
             Optional<String> uncached = cache.notUsed(reports, stdoutFormat);
             if (piped.isEmpty() && uncached.isEmpty()) {
                 // Unchanged files cost one read and one hash; the checker is only built when some file changed.
@@ -254,6 +271,38 @@ final class CheckCommand implements Callable<Integer> {
             return MesolintCommand.EXIT_USAGE;
         }
         return report.failed() ? 1 : 0;
+    }
+
+    /**
+     * The programmes of {@code inputs} changed since {@code --changed}'s revision, said on standard error; empty
+     * when none changed, after saying what was compared (that is a clean run, not a silent pass).
+     */
+    private Optional<List<Path>> changedOnly(Workspace workspace, List<Path> inputs, boolean piped, CommandLine cli)
+            throws ConfigProblem {
+        if (piped) {
+            throw new CommandLine.ParameterException(cli, "--changed selects files of the work tree; it cannot be "
+                    + "used with standard input (-)");
+        }
+        CheckRequest all = workspace.request(inputs);
+        List<Path> candidates = ProgrammeFiles.find(all.root(), all.inputs(), Set.copyOf(all.extraCatalogues()))
+                .programmes();
+        Set<Path> configuring = new HashSet<>(all.extraCatalogues());
+        workspace.config().file().ifPresent(configuring::add);
+        ChangedProgrammes.Selection selection = ChangedProgrammes.since(workspace.root(),
+                Optional.of(changed).filter(c -> !c.isBlank()), candidates, configuring);
+        String since = " since " + SafeText.line(selection.comparedWith());
+        if (selection.everyBecause().isPresent()) {
+            cli.getErr().println("mesolint: " + SafeText.line(selection.everyBecause().get()) + " changed" + since
+                    + ": every programme is checked");
+        } else if (selection.programmes().isEmpty()) {
+            cli.getErr().println("mesolint: no programme changed" + since + " (" + selection.changedFiles()
+                    + " changed file" + (selection.changedFiles() == 1 ? "" : "s") + " compared): nothing to check");
+            return Optional.empty();
+        } else if (!output.quiet) {
+            cli.getErr().println("mesolint: " + selection.programmes().size() + " of " + candidates.size()
+                    + " programmes changed" + since);
+        }
+        return Optional.of(selection.programmes());
     }
 
     /** The run through the results cache; says on standard error how much it reused (unless quiet). */
