@@ -13,6 +13,13 @@ public final class Mesolint {
             + "physician, physiotherapist and local licensed practice, above all where an injury or constraint is "
             + "involved.";
 
+    /**
+     * Version of the built-in rule set: the profiles' thresholds and severities, the rules' metadata and the model's
+     * default figures. Bump it (and add a CHANGELOG.md section) whenever any of them changes; RuleSetVersionTests
+     * fails until you do.
+     */
+    public static final String RULE_SET_VERSION = "2026.12.1";
+
     private static final String VERSION = readVersion();
 
     private Mesolint() {
