@@ -60,7 +60,8 @@ public final class HtmlReport implements ReportWriter {
                 .append(Html.esc(ConsoleReport.summary(run).replaceAll(" -> FAILED.*$", ""))).append("</p>\n<dl>")
                 .append(HtmlPage.fact("Fail level", run.failOn().label()))
                 .append(HtmlPage.fact("Checked folder", input.root().toString()))
-                .append(HtmlPage.fact("mesolint", Mesolint.version()));
+                .append(HtmlPage.fact("mesolint", Mesolint.version()))
+                .append(HtmlPage.fact("rule set", Mesolint.RULE_SET_VERSION));
         if (!input.elapsed().isZero()) {
             page.append(HtmlPage.fact("Run time", JunitReport.seconds(input.elapsed()) + " s"));
         }

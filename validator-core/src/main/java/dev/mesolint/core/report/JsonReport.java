@@ -31,7 +31,8 @@ public final class JsonReport implements ReportWriter {
         ObjectNode doc = JsonText.object();
         doc.put("$schema", SCHEMA_ID);
         doc.put("formatVersion", FORMAT_VERSION);
-        doc.putObject("tool").put("name", "mesolint").put("version", Mesolint.version());
+        doc.putObject("tool").put("name", "mesolint").put("version", Mesolint.version())
+                .put("rulesVersion", Mesolint.RULE_SET_VERSION);
         doc.put("caution", Mesolint.CAUTION);
         doc.put("failOn", run.failOn().label());
         doc.put("failed", run.failed());

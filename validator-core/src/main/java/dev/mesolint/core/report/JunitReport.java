@@ -83,6 +83,7 @@ public final class JunitReport implements ReportWriter {
                 suite.count(Outcome.SKIPPED), "time", seconds(suite.time()));
         xml.open("properties", 2);
         xml.empty("property", 3, "name", "mesolint.version", "value", Mesolint.version());
+        xml.empty("property", 3, "name", "mesolint.rules-version", "value", Mesolint.RULE_SET_VERSION);
         if (!suite.profile().isEmpty()) {
             xml.empty("property", 3, "name", "mesolint.profile", "value", suite.profile());
         }

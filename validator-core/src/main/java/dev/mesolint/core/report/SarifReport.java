@@ -101,7 +101,9 @@ public final class SarifReport implements ReportWriter {
                         + Mesolint.CAUTION);
         ArrayNode rules = driver.putArray("rules");
         input.rules().forEach(r -> rules.add(rule(r, input.options())));
-        driver.putObject("properties").put("caution", Mesolint.CAUTION);
+        // The rule-set version changes whenever a default threshold, severity or model figure does.
+        driver.putObject("properties").put("caution", Mesolint.CAUTION)
+                .put("rulesVersion", Mesolint.RULE_SET_VERSION);
         ObjectNode tool = JsonText.object();
         tool.set("driver", driver);
         return tool;

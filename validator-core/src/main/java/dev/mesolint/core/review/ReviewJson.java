@@ -30,7 +30,8 @@ public final class ReviewJson implements ReviewWriter {
         Review review = input.review();
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", FORMAT);
-        root.putObject("tool").put("name", "mesolint").put("version", Mesolint.version());
+        root.putObject("tool").put("name", "mesolint").put("version", Mesolint.version())
+                .put("rulesVersion", Mesolint.RULE_SET_VERSION);
         root.put("caution", Mesolint.CAUTION);
         ObjectNode base = root.putObject("base");
         base.put("revision", review.base().shown());

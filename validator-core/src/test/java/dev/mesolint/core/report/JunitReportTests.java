@@ -132,7 +132,8 @@ class JunitReportTests {
                 caution = p.getAttribute("value");
             }
         }
-        assertEquals(List.of("mesolint.version", "mesolint.profile", "mesolint.caution"), names);
+        assertEquals(List.of("mesolint.version", "mesolint.rules-version", "mesolint.profile", "mesolint.caution"),
+                names);
         assertEquals(Mesolint.CAUTION, caution);
         List<Element> outs = elements(suite, "system-out");
         assertTrue(outs.get(outs.size() - 1).getTextContent().contains(Mesolint.CAUTION));
