@@ -240,6 +240,7 @@ public final class SarifReport implements ReportWriter {
         for (String part : id.split("-")) {
             name.append(Character.toUpperCase(part.charAt(0))).append(part.substring(1));
         }
-        return name.toString();
+        // SARIF 3.49.7: a name that only differs from the id in case is no name (validators flag it, SARIF1001).
+        return name.toString().equalsIgnoreCase(id) ? name + "Check" : name.toString();
     }
 }

@@ -64,6 +64,8 @@ class SarifReportTests {
             assertEquals(m.summary(), rule.at("/shortDescription/text").asString());
             assertEquals(m.rationale(), rule.at("/fullDescription/text").asString());
             assertEquals(SarifReport.pascalCase(m.id()), rule.get("name").asString(), "every rule has a name");
+            assertFalse(rule.get("name").asString().equalsIgnoreCase(m.id()),
+                    "SARIF 3.49.7: the name is not the id again (" + m.id() + ")");
             assertFalse(rule.has("helpUri"));
             // The rule's whole reference page, inline: the generated page starts with its id as the title.
             assertTrue(rule.at("/help/markdown").asString().startsWith("# " + m.id() + "\n"),
