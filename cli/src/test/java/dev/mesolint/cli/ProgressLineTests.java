@@ -1,6 +1,7 @@
 package dev.mesolint.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -35,7 +36,7 @@ class ProgressLineTests {
         line.finish();
         assertTrue(text.toString().endsWith("\r" + " ".repeat("mesolint: 3/900 files, 5 findings".length()) + "\r"),
                 "the line is wiped so that the report starts at the left margin");
-        assertTrue(!text.toString().contains("\n"), "never a new line: it is one line rewritten");
+        assertFalse(text.toString().contains("\n"), "never a new line: it is one line rewritten");
     }
 
     @Test
