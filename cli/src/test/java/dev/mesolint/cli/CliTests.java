@@ -91,7 +91,7 @@ class CliTests {
         assertEquals(2, r.exit());
         assertEquals("mesolint: .mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: "
                 + "did you mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
-                + "plate-increment)\n",
+                + "plate-increment, rules-version)\n",
                 r.err());
         assertFalse(r.err().contains("Exception"), r.err());
 
@@ -140,6 +140,36 @@ class CliTests {
         assertTrue(fixed.out().contains("info unused-baseline-entry: baseline entry unknown-exercise in harbour-cli"),
                 fixed.out());
         assertTrue(fixed.out().contains("0 waived, 0 baselined"), fixed.out());
+    }
+
+    @Test
+    void anOlderRulesVersionIsNamedOnceWithItsChangesAndTheBaselineRecordedUnderItKeepsMatching()
+            throws IOException {
+        write("programmes/block.yaml", PROGRAMME);
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\nrules-version: 2026.12.0\n");
+        Run recorded = run("baseline", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, recorded.exit(), recorded.err());
+        assertTrue(recorded.out().startsWith("Wrote 2 findings"), recorded.out());
+
+        Run older = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, older.exit(), older.out() + older.err());
+        assertTrue(older.out().contains("0 waived, 2 baselined (1 warning, 1 info)"), older.out());
+        assertTrue(older.err().startsWith("mesolint: .mesolint.yaml records rules-version 2026.12.0; this mesolint "
+                + "applies rule set " + Mesolint.RULE_SET_VERSION), older.err());
+        assertTrue(older.err().contains("  " + Mesolint.RULE_SET_VERSION + ": far-from-failure, effort-conflict: "),
+                "the changelog's entries, plainly: " + older.err());
+        assertEquals(1, older.err().split("records rules-version", -1).length - 1, "said once: " + older.err());
+        assertFalse(older.out().contains("records rules-version"), "standard output keeps the report alone");
+
+        // Brought up to date: no notice, and the same findings baselined.
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\nrules-version: " + Mesolint.RULE_SET_VERSION
+                + "\n");
+        Run current = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, current.exit(), current.out());
+        assertTrue(current.out().contains("0 waived, 2 baselined (1 warning, 1 info)"), current.out());
+        assertFalse(current.err().contains("rules-version"), current.err());
+        assertFalse(run("check", "--quiet", "--root", rootArg(), root.resolve("programmes").toString()).err()
+                .contains("rules-version"), "quiet prints only what fails");
     }
 
     @Test

@@ -175,6 +175,10 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
                 includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
+        Optional<List<String>> notice = prepared.workspace().upgradeNotice();
+        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
+            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
+        }
         CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
         CachedCheck.Outcome outcome = execution.check(useCache() && !figures

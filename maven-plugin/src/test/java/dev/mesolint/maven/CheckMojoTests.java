@@ -165,6 +165,26 @@ class CheckMojoTests {
     }
 
     @Test
+    void anOlderRulesVersionInTheConfigurationIsLoggedAsAWarningWithTheChangesAndFailsNothing() throws Exception {
+        Files.writeString(dir.resolve(".mesolint.yaml"), "root: true\nrules-version: 2026.12.0\n");
+        MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
+
+        repo.check().execute();
+
+        List<String> notice = repo.log.lines.stream().filter(l -> l.startsWith("[WARNING] mesolint: ")).toList();
+        assertTrue(notice.get(0).startsWith("[WARNING] mesolint: .mesolint.yaml records rules-version 2026.12.0; "
+                + "this mesolint applies rule set " + dev.mesolint.core.Mesolint.RULE_SET_VERSION), repo.log.text());
+        assertTrue(notice.stream().anyMatch(l -> l.contains(": volume-spike: ")), repo.log.text());
+        assertEquals(1, repo.log.lines.stream().filter(l -> l.contains("records rules-version")).count());
+
+        Files.writeString(dir.resolve(".mesolint.yaml"), "root: true\nrules-version: "
+                + dev.mesolint.core.Mesolint.RULE_SET_VERSION + "\n");
+        MojoFixture current = new MojoFixture(dir);
+        current.check().execute();
+        assertTrue(current.log.lines.stream().noneMatch(l -> l.contains("rules-version")), current.log.text());
+    }
+
+    @Test
     void skipDoesNothing() throws Exception {
         MojoFixture repo = repository();
         CheckMojo mojo = repo.check();

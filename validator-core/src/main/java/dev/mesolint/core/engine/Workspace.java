@@ -11,6 +11,9 @@ import dev.mesolint.core.profile.ProfileChoice;
 import dev.mesolint.core.profile.ProfileSet;
 import dev.mesolint.core.programme.Goal;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.ruleset.RuleSetChanges;
+import dev.mesolint.core.ruleset.RuleSetVersion;
+import dev.mesolint.core.ruleset.UpgradeNotice;
 import dev.mesolint.core.yaml.YamlLimits;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -112,6 +115,18 @@ public final class Workspace {
     /** The baseline file to compare with: the option, else the configuration's. */
     public Optional<Path> baselineFile() {
         return options.baseline().or(config::baseline);
+    }
+
+    /**
+     * What to tell the user when the configuration records another rule-set version than this mesolint applies
+     * (the versions between and their changelog entries); empty when it records none or the same.
+     */
+    public Optional<List<String>> upgradeNotice() {
+        if (config.rulesVersion().isEmpty() || config.file().isEmpty()) {
+            return Optional.empty();
+        }
+        return UpgradeNotice.lines(config.rulesVersion().get(), RuleSetVersion.current(),
+                ProgrammeFiles.display(options.root(), config.file().get()), RuleSetChanges.shipped());
     }
 
     public RepositoryConfig config() {
