@@ -173,7 +173,7 @@ class WorkspaceTests {
     void badConfigurationIsALocatedErrorWithAFix() {
         assertEquals(".mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: did you "
                 + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
-                + "plate-increment)",
+                + "plate-increment, rules-version)",
                 problem("profile: strength\nfail-level: warning\n").describe());
         assertEquals(".mesolint.yaml:1:10: fail-on 'sometimes' is not a level (fix: one of: error, warning, info)",
                 problem("fail-on: sometimes\n").describe());
