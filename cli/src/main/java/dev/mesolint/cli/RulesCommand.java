@@ -47,7 +47,8 @@ final class RulesCommand implements Callable<Integer> {
             for (RuleDefinition rule : installed.rules()) {
                 RuleSettings s = profile.settings(rule);
                 String pack = installed.pack(rule.id()).map(p -> " [rule pack " + p + "]").orElse("");
-                out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(), rule.metadata().summary(), pack);
+                out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(),
+                        Thresholds.summary(rule.metadata(), s), pack);
                 String thresholds = Thresholds.line(rule.metadata(), s);
                 if (!thresholds.isEmpty()) {
                     out.printf("%-22s %-8s in this profile: %s%n", "", "", thresholds);

@@ -252,15 +252,43 @@ class CliTests {
     }
 
     @Test
+    void summariesReadTheProfilesThresholdsNotTheDefaults() throws IOException {
+        write("club.yaml", "profile: club\nextends: hypertrophy\nrules:\n  no-deload: {max-weeks: 5}\n"
+                + "  short-rest-isolation: {min-rest: 90s}\n");
+        String club = root.resolve("club.yaml").toString();
+        Run rules = run("rules", "--root", rootArg(), "--profile", club);
+        assertEquals(0, rules.exit(), rules.err());
+        // the default of 6 weeks without a deload: common practice (a lighter week every 4-8 weeks)
+        assertTrue(rules.out().contains("\nno-deload              info     More than 5 weeks in a row without a "
+                + "deload week"), rules.out());
+        assertFalse(rules.out().contains("More than 6 weeks"), rules.out());
+        assertTrue(rules.out().contains("follows is at least 90 s."), rules.out());
+
+        Run explain = run("explain", "--root", rootArg(), "--profile", club, "no-deload");
+        assertEquals(0, explain.exit(), explain.err());
+        assertTrue(explain.out().contains("\nMore than 5 weeks in a row without a deload week"), explain.out());
+        assertFalse(explain.out().contains("More than 6 weeks"), explain.out());
+        assertTrue(explain.out().contains("(see docs/profiles.md)"), "links as paths: " + explain.out());
+        Run plain = run("explain", "--root", rootArg(), "no-deload");
+        assertTrue(plain.out().contains("\nMore than 6 weeks in a row"), "the default without a profile");
+    }
+
+    @Test
     void explainPrintsTheReferencePage() {
         Run r = run("explain", "--root", rootArg(), "short-rest-compound");
         assertEquals(0, r.exit(), r.err());
         // 2 min after compound sets: ACSM 2009 position stand (Ratamess et al.), the hypertrophy profile's default
         assertTrue(r.out().startsWith("In the hypertrophy profile: warning; min-rest 2min, min-rest-squat-hinge 2min"),
                 r.out());
-        assertTrue(r.out().contains("\n\n# short-rest-compound\n"), r.out());
+        assertTrue(r.out().contains("\n\nshort-rest-compound\n===================\n"), r.out());
         assertFalse(r.out().contains("<!--"), "no note for contributors in a terminal");
-        assertTrue(r.out().contains("| strength | warning | 2min | 3min |"), r.out());
+        for (String markup : new String[] {"```", "|---", "](", "`", "## ", "**"}) {
+            assertFalse(r.out().contains(markup), "plain terminal text, no " + markup + ": " + r.out());
+        }
+        // the strength profile's 3 min after main squat and hinge lifts: ACSM 2009, 3-5 min for heavy core lifts
+        assertTrue(r.out().lines().anyMatch(l -> l.matches("\\s+strength\\s+warning\\s+2min\\s+3min\\s+1min")),
+                "the by-profile table as aligned columns: " + r.out());
+        assertTrue(r.out().contains("\n    format: 1\n"), "examples indented: " + r.out());
         assertTrue(r.out().contains(Mesolint.CAUTION), r.out());
         Run unknown = run("explain", "short-rest");
         assertEquals(2, unknown.exit());
