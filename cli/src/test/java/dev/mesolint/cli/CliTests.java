@@ -274,6 +274,43 @@ class CliTests {
     }
 
     @Test
+    void aTeamProfilesModelParametersChangeTheFiguresAndABadOneIsLocated() throws IOException {
+        // Four curls at RIR 4: no hard sets at the model's default of RIR 3 or closer (common practice,
+        // docs/model.md "Hard sets"); four once the club's profile counts RIR 4.
+        write("programmes/block.yaml", PROGRAMME.replace("rir: 1", "rir: 4"));
+        write("club.yaml", "profile: club\nextends: hypertrophy\nmodel:\n  hardSetMaxRir: 4\n");
+        String club = root.resolve("club.yaml").toString();
+        Path plain = root.resolve("out/plain.json");
+        Path withClub = root.resolve("out/club.json");
+        assertEquals(0, run("metrics", "--root", rootArg(), "--json", plain.toString(),
+                root.resolve("programmes").toString()).exit());
+        Run metrics = run("metrics", "--root", rootArg(), "--profile", club, "--json", withClub.toString(),
+                root.resolve("programmes").toString());
+        assertEquals(0, metrics.exit(), metrics.err());
+        tools.jackson.databind.JsonNode before = json(plain);
+        tools.jackson.databind.JsonNode after = json(withClub);
+        assertEquals(3, before.at("/programmes/0/parameters/hardSetMaxRir").asDouble(), 1e-9);
+        assertEquals(4, after.at("/programmes/0/parameters/hardSetMaxRir").asDouble(), 1e-9);
+        assertEquals(before.at("/programmes/0/weeks/0/muscles/biceps/hardSets").asDouble() + 4,
+                after.at("/programmes/0/weeks/0/muscles/biceps/hardSets").asDouble(), 1e-9,
+                "the four curls count as hard sets for the biceps, their prime mover: " + after);
+        Run rules = run("rules", "--root", rootArg(), "--profile", club);
+        assertTrue(rules.out().contains("Training-model parameters in this profile (docs/model.md): hardSetMaxRir 4 "
+                + "(default 3)"), rules.out());
+
+        write("club.yaml", "profile: club\nextends: hypertrophy\nmodel:\n  hardSetMaxRir: 9\n");
+        Run bad = run("check", "--root", rootArg(), "--profile", club, root.resolve("programmes").toString());
+        assertEquals(2, bad.exit(), bad.out());
+        assertTrue(bad.err().contains("club.yaml:4:18: model hardSetMaxRir 9 is outside 0..5 (fix: choose a value "
+                + "from 0 to 5"), bad.err());
+        assertFalse(bad.err().contains("Exception"), bad.err());
+    }
+
+    private static tools.jackson.databind.JsonNode json(Path file) throws IOException {
+        return tools.jackson.databind.json.JsonMapper.builder().build().readTree(Files.readString(file));
+    }
+
+    @Test
     void explainPrintsTheReferencePage() {
         Run r = run("explain", "--root", rootArg(), "short-rest-compound");
         assertEquals(0, r.exit(), r.err());
