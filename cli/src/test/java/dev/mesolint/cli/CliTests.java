@@ -95,6 +95,13 @@ class CliTests {
                 r.err());
         assertFalse(r.err().contains("Exception"), r.err());
 
+        Path repo = Files.createDirectories(root.resolve("repo"));
+        Files.writeString(repo.resolve(".mesolint.yaml"), "root: true\ncatalogues: [../programmes/block.yaml]\n");
+        Run outside = run("check", repo.toString());
+        assertEquals(2, outside.exit(), outside.out());
+        assertTrue(outside.err().contains("(fix: keep the file inside the repository, or pass --allow-outside-root "
+                + "when that is intended)"), "the hint names the option: " + outside.err());
+
         write("club.yaml", "profile: club\nrules:\n  short-rest-compound: {min-rest: 2 hours}\n");
         Run p = run("check", "--root", rootArg(), "--config", root.resolve("none.yaml").toString(), "x");
         assertEquals(2, p.exit());

@@ -185,6 +185,21 @@ class CheckMojoTests {
     }
 
     @Test
+    void aConfiguredPathOutsideTheRootIsRefusedInThePluginsWords() throws Exception {
+        Files.writeString(dir.resolve("outside.yaml"), "format: 1\nexercises: []\n");
+        Path repo = Files.createDirectories(dir.resolve("repo"));
+        Files.writeString(repo.resolve(".mesolint.yaml"), "root: true\ncatalogues: [../outside.yaml]\n");
+        MojoFixture fixture = new MojoFixture(repo).programme("good.yaml", MojoFixture.PROGRAMME);
+
+        MojoExecutionException e = assertThrows(MojoExecutionException.class, () -> fixture.check().execute());
+
+        assertTrue(e.getMessage().startsWith("mesolint: .mesolint.yaml:2:14: this path is refused"), e.getMessage());
+        assertTrue(e.getMessage().contains("(fix: keep the file inside the repository)"), e.getMessage());
+        assertTrue(!e.getMessage().contains("--") && !e.getMessage().contains("allowOutsideRoot"),
+                "no option the plugin does not have: " + e.getMessage());
+    }
+
+    @Test
     void skipDoesNothing() throws Exception {
         MojoFixture repo = repository();
         CheckMojo mojo = repo.check();

@@ -55,10 +55,16 @@ public final class RepositoryConfigReader {
      */
     public static RepositoryConfig read(Path file, String shown, Path root, boolean allowOutsideRoot)
             throws ConfigProblem {
+        return read(file, shown, root, allowOutsideRoot, SettingNames.NEUTRAL);
+    }
+
+    /** As above; a refused path's hint names the caller's setting that would accept it, if it offers one. */
+    public static RepositoryConfig read(Path file, String shown, Path root, boolean allowOutsideRoot,
+            SettingNames names) throws ConfigProblem {
         ConfigDocument doc = ConfigDocument.read(file, shown);
         RepositoryConfig config = parse(doc, file);
         if (!allowOutsideRoot) {
-            new Confinement(doc, root).check(config);
+            new Confinement(doc, root, names.find(SettingNames.ALLOW_OUTSIDE_ROOT)).check(config);
         }
         return config;
     }

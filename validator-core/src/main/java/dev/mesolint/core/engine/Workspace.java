@@ -5,6 +5,7 @@ import dev.mesolint.core.config.FolderRule;
 import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.config.RepositoryConfig;
 import dev.mesolint.core.config.RepositoryConfigReader;
+import dev.mesolint.core.config.SettingNames;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.profile.BuiltInProfiles;
 import dev.mesolint.core.profile.ProfileChoice;
@@ -45,7 +46,8 @@ public final class Workspace {
     public static Workspace open(RunOptions options, List<? extends RuleDefinition> rules) throws ConfigProblem {
         RepositoryConfig config = readConfig(options);
         Optional<ProfileRef> forced = options.profile()
-                .map(p -> ProfileRef.of(p, Path.of("").toAbsolutePath(), "--profile", null));
+                .map(p -> ProfileRef.of(p, Path.of("").toAbsolutePath(), options.names().of(SettingNames.PROFILE),
+                        null));
         List<ProfileRef> refs = new ArrayList<>();
         forced.ifPresent(refs::add);
         config.profile().ifPresent(refs::add);
@@ -87,17 +89,18 @@ public final class Workspace {
         if (options.config().isPresent()) {
             Path file = options.config().get();
             if (!Files.isRegularFile(file)) {
-                throw new ConfigProblem("--config", null, "no configuration file at " + file,
-                        "check the path, or leave --config out to use " + RepositoryConfig.FILE_NAME
-                                + " in the root folder");
+                String setting = options.names().of(SettingNames.CONFIG);
+                throw new ConfigProblem(setting, null, "no configuration file at " + file,
+                        "check the path, or leave " + setting + " out to use the nearest " + RepositoryConfig.FILE_NAME
+                                + " above the checked paths");
             }
             return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file), options.root(),
-                    options.allowOutsideRoot());
+                    options.allowOutsideRoot(), options.names());
         }
         Optional<Path> found = options.foundConfig().filter(Files::isRegularFile);
         return found.isPresent()
                 ? RepositoryConfigReader.read(found.get(), ProgrammeFiles.display(options.root(), found.get()),
-                        options.root(), options.allowOutsideRoot())
+                        options.root(), options.allowOutsideRoot(), options.names())
                 : RepositoryConfig.NONE;
     }
 
