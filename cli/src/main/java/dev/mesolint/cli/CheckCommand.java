@@ -252,6 +252,11 @@ final class CheckCommand implements Callable<Integer> {
             cli.getErr().println("mesolint: " + SafeText.line(e.getMessage()));
             unwritten = true;
         }
+        if (!output.quiet) {
+            // After the report, where it is read; a notice only, it never changes the exit code.
+            workspace.upgradeNotice().ifPresent(lines -> cli.getErr().println("mesolint: "
+                    + String.join(System.lineSeparator(), lines.stream().map(SafeText::line).toList())));
+        }
         if (!hidden.isEmpty()) {
             cli.getErr().println("mesolint: " + hidden.size() + " hidden .yaml file" + (hidden.size() == 1 ? "" : "s")
                     + " not checked (folders skip names that start with '.'; name a file to check it): "

@@ -2,11 +2,13 @@ package dev.mesolint.cli;
 
 import dev.mesolint.core.config.RepositoryConfig;
 import dev.mesolint.core.config.RepositoryLayout;
+import dev.mesolint.core.config.SettingNames;
 import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.finding.Severity;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import picocli.CommandLine.Option;
 
@@ -43,8 +45,13 @@ final class ConfigOptions {
     RunOptions toRunOptions(List<Path> inputs, List<Path> catalogues, Optional<Severity> failOn,
             Optional<Path> baseline) {
         return new RunOptions(RepositoryLayout.discover(inputs, Optional.ofNullable(root), Path.of("")), Optional.ofNullable(config),
-                Optional.ofNullable(profile), failOn, catalogues, baseline).allowingOutsideRoot(allowOutsideRoot);
+                Optional.ofNullable(profile), failOn, catalogues, baseline).allowingOutsideRoot(allowOutsideRoot)
+                .namedAs(NAMES);
     }
+
+    /** The options' names, for the core's problems and hints. */
+    static final SettingNames NAMES = SettingNames.of(Map.of(SettingNames.CONFIG, "--config", SettingNames.PROFILE,
+            "--profile", SettingNames.BASELINE, "--baseline", SettingNames.ALLOW_OUTSIDE_ROOT, "--allow-outside-root"));
 
     /** {@code --catalogue}, for the commands that check programmes. */
     static final class Catalogues {

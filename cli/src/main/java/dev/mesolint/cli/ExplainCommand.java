@@ -66,11 +66,13 @@ final class ExplainCommand implements Callable<Integer> {
             out.println("In the " + profile.name() + " profile: " + settings.severity().label()
                     + (thresholds.isEmpty() ? "" : "; " + thresholds));
             out.println();
+            // The page's summary reads the defaults; under a profile it reads that profile's thresholds.
+            page = page.replace(rule.get().metadata().summary(), Thresholds.summary(rule.get().metadata(), settings));
         } catch (ConfigProblem e) {
             return Installed.fail(e, spec.commandLine().getErr());
         }
-        // The page is read in a terminal: the note for contributors that heads the file is left out.
-        out.print(page.replaceAll("(?s)<!--.*?-->\\n*", ""));
+        // The page is read in a terminal: plain text, without the note for contributors that heads the file.
+        out.print(TerminalPage.render(page));
         spec.commandLine().getOut().flush();
         return 0;
     }

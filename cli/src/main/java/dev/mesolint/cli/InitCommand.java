@@ -96,7 +96,7 @@ final class InitCommand implements Callable<Integer> {
                 throw new IllegalStateException("the init template " + name + " is missing from the jar");
             }
             return new String(in.readAllBytes(), StandardCharsets.UTF_8).replace("@MESOLINT_VERSION@",
-                    Mesolint.version());
+                    Mesolint.version()).replace("@RULES_VERSION@", Mesolint.RULE_SET_VERSION);
         }
     }
 }

@@ -94,7 +94,8 @@ public final class MesolintCommand implements Runnable {
     static final class Version implements CommandLine.IVersionProvider {
         @Override
         public String[] getVersion() {
-            return new String[] {"mesolint " + Mesolint.version(), "Java " + System.getProperty("java.version")};
+            return new String[] {"mesolint " + Mesolint.version(), "rule set " + Mesolint.RULE_SET_VERSION,
+                "Java " + System.getProperty("java.version")};
         }
     }
 }

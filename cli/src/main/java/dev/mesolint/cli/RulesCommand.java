@@ -4,6 +4,8 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.model.ModelParameters;
+import dev.mesolint.core.model.NamedModelParameters;
 import dev.mesolint.core.profile.ResolvedProfile;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
@@ -47,11 +49,17 @@ final class RulesCommand implements Callable<Integer> {
             for (RuleDefinition rule : installed.rules()) {
                 RuleSettings s = profile.settings(rule);
                 String pack = installed.pack(rule.id()).map(p -> " [rule pack " + p + "]").orElse("");
-                out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(), rule.metadata().summary(), pack);
+                out.printf("%-22s %-8s %s%s%n", rule.id(), s.severity().label(),
+                        Thresholds.summary(rule.metadata(), s), pack);
                 String thresholds = Thresholds.line(rule.metadata(), s);
                 if (!thresholds.isEmpty()) {
                     out.printf("%-22s %-8s in this profile: %s%n", "", "", thresholds);
                 }
+            }
+            List<String> model = changedModelParameters(profile.model());
+            if (!model.isEmpty()) {
+                out.println();
+                out.println("Training-model parameters in this profile (docs/model.md): " + String.join(", ", model));
             }
             out.println();
             out.println("Caution: " + Mesolint.CAUTION);
@@ -60,5 +68,20 @@ final class RulesCommand implements Callable<Integer> {
         } catch (ConfigProblem e) {
             return Installed.fail(e, spec.commandLine().getErr());
         }
+    }
+
+    /** {@code hardSetMaxRir 4 (default 3)} for each model parameter the profile (or one it extends) changes. */
+    private static List<String> changedModelParameters(ModelParameters model) {
+        ModelParameters defaults = ModelParameters.defaults();
+        return NamedModelParameters.names().stream()
+                .filter(n -> !NamedModelParameters.value(model, n).equals(NamedModelParameters.value(defaults, n)))
+                .map(n -> n + " " + shown(NamedModelParameters.value(model, n)) + " (default "
+                        + shown(NamedModelParameters.value(defaults, n)) + ")")
+                .toList();
+    }
+
+    private static String shown(Object value) {
+        return value instanceof Double d && d == Math.rint(d) ? Long.toString(d.longValue())
+                : String.valueOf(value).toLowerCase(java.util.Locale.ROOT);
     }
 }

@@ -79,6 +79,8 @@ class CheckCommandTests {
         Run version = run("--version");
         assertEquals(0, version.exit());
         assertTrue(version.out().startsWith("mesolint 0."), version.out());
+        assertTrue(version.out().contains("\nrule set " + dev.mesolint.core.Mesolint.RULE_SET_VERSION + "\n"),
+                version.out());
         Run help = run("--help");
         assertTrue(help.out().contains("check"), help.out());
         assertTrue(help.out().contains("PAR-Q+"), "help carries the caution");

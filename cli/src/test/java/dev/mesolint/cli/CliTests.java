@@ -91,9 +91,16 @@ class CliTests {
         assertEquals(2, r.exit());
         assertEquals("mesolint: .mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: "
                 + "did you mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
-                + "plate-increment)\n",
+                + "plate-increment, rules-version)\n",
                 r.err());
         assertFalse(r.err().contains("Exception"), r.err());
+
+        Path repo = Files.createDirectories(root.resolve("repo"));
+        Files.writeString(repo.resolve(".mesolint.yaml"), "root: true\ncatalogues: [../programmes/block.yaml]\n");
+        Run outside = run("check", repo.toString());
+        assertEquals(2, outside.exit(), outside.out());
+        assertTrue(outside.err().contains("(fix: keep the file inside the repository, or pass --allow-outside-root "
+                + "when that is intended)"), "the hint names the option: " + outside.err());
 
         write("club.yaml", "profile: club\nrules:\n  short-rest-compound: {min-rest: 2 hours}\n");
         Run p = run("check", "--root", rootArg(), "--config", root.resolve("none.yaml").toString(), "x");
@@ -140,6 +147,36 @@ class CliTests {
         assertTrue(fixed.out().contains("info unused-baseline-entry: baseline entry unknown-exercise in harbour-cli"),
                 fixed.out());
         assertTrue(fixed.out().contains("0 waived, 0 baselined"), fixed.out());
+    }
+
+    @Test
+    void anOlderRulesVersionIsNamedOnceWithItsChangesAndTheBaselineRecordedUnderItKeepsMatching()
+            throws IOException {
+        write("programmes/block.yaml", PROGRAMME);
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\nrules-version: 2026.12.0\n");
+        Run recorded = run("baseline", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, recorded.exit(), recorded.err());
+        assertTrue(recorded.out().startsWith("Wrote 2 findings"), recorded.out());
+
+        Run older = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, older.exit(), older.out() + older.err());
+        assertTrue(older.out().contains("0 waived, 2 baselined (1 warning, 1 info)"), older.out());
+        assertTrue(older.err().startsWith("mesolint: .mesolint.yaml records rules-version 2026.12.0; this mesolint "
+                + "applies rule set " + Mesolint.RULE_SET_VERSION), older.err());
+        assertTrue(older.err().contains("  " + Mesolint.RULE_SET_VERSION + ": far-from-failure, effort-conflict: "),
+                "the changelog's entries, plainly: " + older.err());
+        assertEquals(1, older.err().split("records rules-version", -1).length - 1, "said once: " + older.err());
+        assertFalse(older.out().contains("records rules-version"), "standard output keeps the report alone");
+
+        // Brought up to date: no notice, and the same findings baselined.
+        write(".mesolint.yaml", "baseline: .mesolint-baseline.json\nrules-version: " + Mesolint.RULE_SET_VERSION
+                + "\n");
+        Run current = run("check", "--root", rootArg(), root.resolve("programmes").toString());
+        assertEquals(0, current.exit(), current.out());
+        assertTrue(current.out().contains("0 waived, 2 baselined (1 warning, 1 info)"), current.out());
+        assertFalse(current.err().contains("rules-version"), current.err());
+        assertFalse(run("check", "--quiet", "--root", rootArg(), root.resolve("programmes").toString()).err()
+                .contains("rules-version"), "quiet prints only what fails");
     }
 
     @Test
@@ -222,15 +259,80 @@ class CliTests {
     }
 
     @Test
+    void summariesReadTheProfilesThresholdsNotTheDefaults() throws IOException {
+        write("club.yaml", "profile: club\nextends: hypertrophy\nrules:\n  no-deload: {max-weeks: 5}\n"
+                + "  short-rest-isolation: {min-rest: 90s}\n");
+        String club = root.resolve("club.yaml").toString();
+        Run rules = run("rules", "--root", rootArg(), "--profile", club);
+        assertEquals(0, rules.exit(), rules.err());
+        // the default of 6 weeks without a deload: common practice (a lighter week every 4-8 weeks)
+        assertTrue(rules.out().contains("\nno-deload              info     More than 5 weeks in a row without a "
+                + "deload week"), rules.out());
+        assertFalse(rules.out().contains("More than 6 weeks"), rules.out());
+        assertTrue(rules.out().contains("follows is at least 90 s."), rules.out());
+
+        Run explain = run("explain", "--root", rootArg(), "--profile", club, "no-deload");
+        assertEquals(0, explain.exit(), explain.err());
+        assertTrue(explain.out().contains("\nMore than 5 weeks in a row without a deload week"), explain.out());
+        assertFalse(explain.out().contains("More than 6 weeks"), explain.out());
+        assertTrue(explain.out().contains("(see docs/profiles.md)"), "links as paths: " + explain.out());
+        Run plain = run("explain", "--root", rootArg(), "no-deload");
+        assertTrue(plain.out().contains("\nMore than 6 weeks in a row"), "the default without a profile");
+    }
+
+    @Test
+    void aTeamProfilesModelParametersChangeTheFiguresAndABadOneIsLocated() throws IOException {
+        // Four curls at RIR 4: no hard sets at the model's default of RIR 3 or closer (common practice,
+        // docs/model.md "Hard sets"); four once the club's profile counts RIR 4.
+        write("programmes/block.yaml", PROGRAMME.replace("rir: 1", "rir: 4"));
+        write("club.yaml", "profile: club\nextends: hypertrophy\nmodel:\n  hardSetMaxRir: 4\n");
+        String club = root.resolve("club.yaml").toString();
+        Path plain = root.resolve("out/plain.json");
+        Path withClub = root.resolve("out/club.json");
+        assertEquals(0, run("metrics", "--root", rootArg(), "--json", plain.toString(),
+                root.resolve("programmes").toString()).exit());
+        Run metrics = run("metrics", "--root", rootArg(), "--profile", club, "--json", withClub.toString(),
+                root.resolve("programmes").toString());
+        assertEquals(0, metrics.exit(), metrics.err());
+        tools.jackson.databind.JsonNode before = json(plain);
+        tools.jackson.databind.JsonNode after = json(withClub);
+        assertEquals(3, before.at("/programmes/0/parameters/hardSetMaxRir").asDouble(), 1e-9);
+        assertEquals(4, after.at("/programmes/0/parameters/hardSetMaxRir").asDouble(), 1e-9);
+        assertEquals(before.at("/programmes/0/weeks/0/muscles/biceps/hardSets").asDouble() + 4,
+                after.at("/programmes/0/weeks/0/muscles/biceps/hardSets").asDouble(), 1e-9,
+                "the four curls count as hard sets for the biceps, their prime mover: " + after);
+        Run rules = run("rules", "--root", rootArg(), "--profile", club);
+        assertTrue(rules.out().contains("Training-model parameters in this profile (docs/model.md): hardSetMaxRir 4 "
+                + "(default 3)"), rules.out());
+
+        write("club.yaml", "profile: club\nextends: hypertrophy\nmodel:\n  hardSetMaxRir: 9\n");
+        Run bad = run("check", "--root", rootArg(), "--profile", club, root.resolve("programmes").toString());
+        assertEquals(2, bad.exit(), bad.out());
+        assertTrue(bad.err().contains("club.yaml:4:18: model hardSetMaxRir 9 is outside 0..5 (fix: choose a value "
+                + "from 0 to 5"), bad.err());
+        assertFalse(bad.err().contains("Exception"), bad.err());
+    }
+
+    private static tools.jackson.databind.JsonNode json(Path file) throws IOException {
+        return tools.jackson.databind.json.JsonMapper.builder().build().readTree(Files.readString(file));
+    }
+
+    @Test
     void explainPrintsTheReferencePage() {
         Run r = run("explain", "--root", rootArg(), "short-rest-compound");
         assertEquals(0, r.exit(), r.err());
         // 2 min after compound sets: ACSM 2009 position stand (Ratamess et al.), the hypertrophy profile's default
         assertTrue(r.out().startsWith("In the hypertrophy profile: warning; min-rest 2min, min-rest-squat-hinge 2min"),
                 r.out());
-        assertTrue(r.out().contains("\n\n# short-rest-compound\n"), r.out());
+        assertTrue(r.out().contains("\n\nshort-rest-compound\n===================\n"), r.out());
         assertFalse(r.out().contains("<!--"), "no note for contributors in a terminal");
-        assertTrue(r.out().contains("| strength | warning | 2min | 3min |"), r.out());
+        for (String markup : new String[] {"```", "|---", "](", "`", "## ", "**"}) {
+            assertFalse(r.out().contains(markup), "plain terminal text, no " + markup + ": " + r.out());
+        }
+        // the strength profile's 3 min after main squat and hinge lifts: ACSM 2009, 3-5 min for heavy core lifts
+        assertTrue(r.out().lines().anyMatch(l -> l.matches("\\s+strength\\s+warning\\s+2min\\s+3min\\s+1min")),
+                "the by-profile table as aligned columns: " + r.out());
+        assertTrue(r.out().contains("\n    format: 1\n"), "examples indented: " + r.out());
         assertTrue(r.out().contains(Mesolint.CAUTION), r.out());
         Run unknown = run("explain", "short-rest");
         assertEquals(2, unknown.exit());

@@ -38,6 +38,8 @@ class InitCommandTests {
         assertTrue(Files.readString(club.resolve("pom.xml")).contains("<mesolint.version>" + Mesolint.version()
                 + "</mesolint.version>"));
         assertTrue(init.out().contains(Mesolint.CAUTION));
+        assertTrue(Files.readString(club.resolve(".mesolint.yaml")).contains("\nrules-version: "
+                + Mesolint.RULE_SET_VERSION + "\n"), "the scaffold records the rule set it starts with");
 
         // The sample passes under the scaffold's own configuration (fail-on: warning, the club's profile and
         // catalogue), checked from inside the repository ...

@@ -175,6 +175,10 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
                 includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
+        Optional<List<String>> notice = prepared.workspace().upgradeNotice();
+        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
+            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
+        }
         CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
         CachedCheck.Outcome outcome = execution.check(useCache() && !figures
@@ -184,7 +188,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         }
         if (!targets.isEmpty()) {
             execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
-                    outputDirectory.toPath(), !noReasons, !ignoreBaseline
+                    reportFolder().toPath(), !noReasons, !ignoreBaseline
                     && prepared.workspace().baselineFile().isPresent() || newSince != null);
         }
         afterCheck(outcome, reportOnly);
@@ -192,6 +196,11 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
 
     /** The report formats this goal writes, as configured. */
     abstract List<String> reportFormats();
+
+    /** The folder this goal writes its reports to: the output folder, unless the goal writes into a site. */
+    File reportFolder() {
+        return outputDirectory;
+    }
 
     /** Whether this goal reads and writes the result cache. */
     abstract boolean useCache();
@@ -210,7 +219,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             ReportFormat format = ReportFormat.parse(name).orElseThrow(() -> new MojoExecutionException(
                     "mesolint: reports (mesolint.reports): unknown format '" + name + "'; formats: "
                             + ReportFormat.names()));
-            targets.add(RunReports.inFolder(format, outputDirectory.toPath()));
+            targets.add(RunReports.inFolder(format, reportFolder().toPath()));
         }
         return targets;
     }

@@ -1,12 +1,17 @@
 package dev.mesolint.maven;
 
 import java.util.Collections;
+import java.util.HashSet;
 import java.util.Map;
+import java.util.Set;
 import java.util.WeakHashMap;
 
-/** Remembers what was already done in a build, so the caution is logged once however many executions run. */
+/**
+ * Remembers what was already done in a build, so the caution (and the rule-set notice) is logged once however many
+ * executions run.
+ */
 final class OncePerBuild {
-    private static final Map<Object, Boolean> DONE = Collections.synchronizedMap(new WeakHashMap<>());
+    private static final Map<Object, Set<String>> DONE = Collections.synchronizedMap(new WeakHashMap<>());
 
     private OncePerBuild() {
     }
@@ -16,6 +21,16 @@ final class OncePerBuild {
      * session's execution request); a {@code null} build always answers true.
      */
     static boolean first(Object build) {
-        return build == null || DONE.putIfAbsent(build, Boolean.TRUE) == null;
+        return first(build, "caution");
+    }
+
+    /** True the first time {@code what} is asked about in {@code build}; a {@code null} build always answers true. */
+    static boolean first(Object build, String what) {
+        if (build == null) {
+            return true;
+        }
+        synchronized (DONE) {
+            return DONE.computeIfAbsent(build, b -> new HashSet<>()).add(what);
+        }
     }
 }

@@ -4,6 +4,7 @@ import dev.mesolint.core.cache.ConfigurationKey;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.config.RepositoryLayout;
+import dev.mesolint.core.config.SettingNames;
 import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.ProgrammeFiles;
@@ -30,9 +31,10 @@ import org.apache.maven.plugin.MojoExecutionException;
 record RunSettings(Path projectDir, File programmes, File config, String profile, String failOn, List<File> catalogues,
         File baseline, List<String> includes, List<String> excludes) {
 
-    /** How configuration problems the core reports by command-line option are named for Maven users. */
-    private static final Map<String, String> PARAMETERS = Map.of("--config", "config (mesolint.config)",
-            "--profile", "profile (mesolint.profile)", "--baseline", "baseline (mesolint.baseline)");
+    /** The parameters' names, for the core's problems and hints (the plugin offers no allowOutsideRoot). */
+    private static final SettingNames PARAMETERS = SettingNames.of(Map.of(SettingNames.CONFIG,
+            "config (mesolint.config)", SettingNames.PROFILE, "profile (mesolint.profile)", SettingNames.BASELINE,
+            "baseline (mesolint.baseline)"));
 
     /** Everything a run needs, the cache key and, for the debug log, where each setting came from. */
     record Prepared(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, ConfigurationKey key,
@@ -70,7 +72,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
         // The repository root and configuration are found by walking up from the programmes, as on the command line.
         RepositoryLayout layout = RepositoryLayout.discover(List.of(programmes.toPath()), Optional.empty(), projectDir);
         RunOptions options = new RunOptions(layout, Optional.ofNullable(config).map(File::toPath), forced, level, extra,
-                Optional.ofNullable(baseline).map(File::toPath));
+                Optional.ofNullable(baseline).map(File::toPath)).namedAs(PARAMETERS);
         try {
             List<RuleDefinition> rules = InstalledRules.discover(RunSettings.class.getClassLoader()).rules();
             Workspace workspace = Workspace.open(options, rules);
@@ -120,13 +122,7 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
 
     /** A configuration problem as a build error: {@code mesolint: file:line:column: message (fix: ...)}. */
     static MojoExecutionException problem(ConfigProblem e) {
-        String described = e.describe();
-        for (Map.Entry<String, String> p : PARAMETERS.entrySet()) {
-            if (e.source().equals(p.getKey())) {
-                described = p.getValue() + described.substring(p.getKey().length());
-            }
-        }
-        return new MojoExecutionException("mesolint: " + described, e);
+        return new MojoExecutionException("mesolint: " + e.describe(), e);
     }
 
     private static MojoExecutionException error(String parameter, String message) {

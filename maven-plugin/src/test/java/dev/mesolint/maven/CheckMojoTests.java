@@ -165,6 +165,41 @@ class CheckMojoTests {
     }
 
     @Test
+    void anOlderRulesVersionInTheConfigurationIsLoggedAsAWarningWithTheChangesAndFailsNothing() throws Exception {
+        Files.writeString(dir.resolve(".mesolint.yaml"), "root: true\nrules-version: 2026.12.0\n");
+        MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
+
+        repo.check().execute();
+
+        List<String> notice = repo.log.lines.stream().filter(l -> l.startsWith("[WARNING] mesolint: ")).toList();
+        assertTrue(notice.get(0).startsWith("[WARNING] mesolint: .mesolint.yaml records rules-version 2026.12.0; "
+                + "this mesolint applies rule set " + dev.mesolint.core.Mesolint.RULE_SET_VERSION), repo.log.text());
+        assertTrue(notice.stream().anyMatch(l -> l.contains(": volume-spike: ")), repo.log.text());
+        assertEquals(1, repo.log.lines.stream().filter(l -> l.contains("records rules-version")).count());
+
+        Files.writeString(dir.resolve(".mesolint.yaml"), "root: true\nrules-version: "
+                + dev.mesolint.core.Mesolint.RULE_SET_VERSION + "\n");
+        MojoFixture current = new MojoFixture(dir);
+        current.check().execute();
+        assertTrue(current.log.lines.stream().noneMatch(l -> l.contains("rules-version")), current.log.text());
+    }
+
+    @Test
+    void aConfiguredPathOutsideTheRootIsRefusedInThePluginsWords() throws Exception {
+        Files.writeString(dir.resolve("outside.yaml"), "format: 1\nexercises: []\n");
+        Path repo = Files.createDirectories(dir.resolve("repo"));
+        Files.writeString(repo.resolve(".mesolint.yaml"), "root: true\ncatalogues: [../outside.yaml]\n");
+        MojoFixture fixture = new MojoFixture(repo).programme("good.yaml", MojoFixture.PROGRAMME);
+
+        MojoExecutionException e = assertThrows(MojoExecutionException.class, () -> fixture.check().execute());
+
+        assertTrue(e.getMessage().startsWith("mesolint: .mesolint.yaml:2:14: this path is refused"), e.getMessage());
+        assertTrue(e.getMessage().contains("(fix: keep the file inside the repository)"), e.getMessage());
+        assertTrue(!e.getMessage().contains("--") && !e.getMessage().contains("allowOutsideRoot"),
+                "no option the plugin does not have: " + e.getMessage());
+    }
+
+    @Test
     void skipDoesNothing() throws Exception {
         MojoFixture repo = repository();
         CheckMojo mojo = repo.check();

@@ -60,4 +60,11 @@ final class MojoFixture {
     ReportMojo report() {
         return configure(new ReportMojo());
     }
+
+    /** The site report as {@code mvn site} runs it: the site plugin hands it the site folder. */
+    SiteReportMojo siteReport() {
+        SiteReportMojo mojo = configure(new SiteReportMojo());
+        mojo.setReportOutputDirectory(root.resolve("target/site").toFile());
+        return mojo;
+    }
 }

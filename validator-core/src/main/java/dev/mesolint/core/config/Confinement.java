@@ -13,10 +13,13 @@ import java.util.Optional;
 final class Confinement {
     private final ConfigDocument doc;
     private final Path root;
+    private final Optional<String> allowSetting;
 
-    Confinement(ConfigDocument doc, Path root) {
+    /** @param allowSetting the caller's setting that accepts such paths, named in the hint when it has one */
+    Confinement(ConfigDocument doc, Path root, Optional<String> allowSetting) {
         this.doc = doc;
         this.root = root;
+        this.allowSetting = allowSetting;
     }
 
     void check(RepositoryConfig config) throws ConfigProblem {
@@ -51,7 +54,8 @@ final class Confinement {
             SafeFiles.insideRoot(root, file);
         } catch (FileRefusedException e) {
             // The message names the key, never the file's content (it is not read at all).
-            throw doc.problemAt(pointer, "this path is refused: " + e.getMessage(), e.hint());
+            throw doc.problemAt(pointer, "this path is refused: " + e.getMessage(), e.hint()
+                    + allowSetting.map(a -> ", or pass " + a + " when that is intended").orElse(""));
         } catch (IOException e) {
             // A missing file is reported where it is read, with its own message.
         }

@@ -3,6 +3,7 @@ package dev.mesolint.core.config;
 import dev.mesolint.core.catalogue.Named;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.Goal;
+import dev.mesolint.core.ruleset.RuleSetVersion;
 import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.value.Load;
 import dev.mesolint.core.yaml.Pointers;
@@ -18,7 +19,7 @@ import tools.jackson.databind.JsonNode;
 /** Reads and checks the repository configuration file; every problem is located at the key or value at fault. */
 public final class RepositoryConfigReader {
     static final List<String> KEYS = List.of("profile", "goals", "folders", "catalogues", "fail-on", "baseline", "root",
-            "plate-increment");
+            "plate-increment", "rules-version");
     private static final List<String> FOLDER_KEYS = List.of("match", "profile");
     private static final String EXAMPLE = "folders: [{match: rehab/, profile: profiles/rehab.yaml}]";
 
@@ -54,10 +55,16 @@ public final class RepositoryConfigReader {
      */
     public static RepositoryConfig read(Path file, String shown, Path root, boolean allowOutsideRoot)
             throws ConfigProblem {
+        return read(file, shown, root, allowOutsideRoot, SettingNames.NEUTRAL);
+    }
+
+    /** As above; a refused path's hint names the caller's setting that would accept it, if it offers one. */
+    public static RepositoryConfig read(Path file, String shown, Path root, boolean allowOutsideRoot,
+            SettingNames names) throws ConfigProblem {
         ConfigDocument doc = ConfigDocument.read(file, shown);
         RepositoryConfig config = parse(doc, file);
         if (!allowOutsideRoot) {
-            new Confinement(doc, root).check(config);
+            new Confinement(doc, root, names.find(SettingNames.ALLOW_OUTSIDE_ROOT)).check(config);
         }
         return config;
     }
@@ -91,7 +98,8 @@ public final class RepositoryConfigReader {
         }
         return new RepositoryConfig(Optional.of(file.toAbsolutePath().normalize()), profile,
                 goals(doc, root.get("goals"), base), folders(doc, root.get("folders"), base),
-                catalogues(doc, root.get("catalogues"), base), failOn, baseline, plateIncrement(doc, root));
+                catalogues(doc, root.get("catalogues"), base), failOn, baseline, plateIncrement(doc, root),
+                rulesVersion(doc, root));
     }
 
     private static Optional<Load.Absolute> plateIncrement(ConfigDocument doc, JsonNode root) throws ConfigProblem {
@@ -108,6 +116,17 @@ public final class RepositoryConfigReader {
         }
         throw doc.problemAt("/plate-increment", "plate-increment '" + text + "' is not a weight",
                 "write the smallest loading step with its unit: plate-increment: 2.5kg (or 5lb)");
+    }
+
+    private static Optional<RuleSetVersion> rulesVersion(ConfigDocument doc, JsonNode root) throws ConfigProblem {
+        if (!root.has("rules-version")) {
+            return Optional.empty();
+        }
+        String example = "rules-version: " + RuleSetVersion.current();
+        String text = doc.scalar(root.get("rules-version"), "/rules-version", example);
+        return Optional.of(RuleSetVersion.parse(text).orElseThrow(() -> doc.problemAt("/rules-version",
+                "rules-version '" + text + "' is not a rule-set version (YEAR.MONTH.RELEASE)", "write " + example
+                        + ", the rule set of this mesolint ('mesolint --version' names it)")));
     }
 
     private static ProfileRef ref(ConfigDocument doc, JsonNode node, String pointer, Path base) throws ConfigProblem {

@@ -1,5 +1,6 @@
 package dev.mesolint.core.engine;
 
+import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.profile.ProfileChoice;
 import dev.mesolint.core.profile.ProfileSet;
 import dev.mesolint.core.programme.Programme;
@@ -34,5 +35,10 @@ public final class ProfileConfiguration implements RuleConfiguration {
     @Override
     public RuleSettings settingsFor(String profile, RuleDefinition rule) {
         return profiles.get(profile).settings(rule);
+    }
+
+    @Override
+    public ModelParameters modelParameters(String profile) {
+        return profiles.get(profile).model();
     }
 }

@@ -2,6 +2,7 @@ package dev.mesolint.core.engine;
 
 import dev.mesolint.core.config.RepositoryConfig;
 import dev.mesolint.core.config.RepositoryLayout;
+import dev.mesolint.core.config.SettingNames;
 import dev.mesolint.core.finding.Severity;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -18,9 +19,11 @@ import java.util.Optional;
  * @param baseline    a baseline file to compare with, overriding the configuration's
  * @param foundConfig the configuration file found by walking up from the checked paths ({@link RepositoryLayout})
  * @param allowOutsideRoot accept configured paths that resolve outside {@code root} (refused by default)
+ * @param names       how the front end names these settings, for problems and hints in its words
  */
 public record RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
-        List<Path> catalogues, Optional<Path> baseline, Optional<Path> foundConfig, boolean allowOutsideRoot) {
+        List<Path> catalogues, Optional<Path> baseline, Optional<Path> foundConfig, boolean allowOutsideRoot,
+        SettingNames names) {
 
     public RunOptions {
         root = root.toAbsolutePath().normalize();
@@ -30,18 +33,25 @@ public record RunOptions(Path root, Optional<Path> config, Optional<String> prof
     /** Options for a known root: the configuration is {@code root/.mesolint.yaml} when it exists. */
     public RunOptions(Path root, Optional<Path> config, Optional<String> profile, Optional<Severity> failOn,
             List<Path> catalogues, Optional<Path> baseline) {
-        this(root, config, profile, failOn, catalogues, baseline, atRoot(root), false);
+        this(root, config, profile, failOn, catalogues, baseline, atRoot(root), false, SettingNames.NEUTRAL);
     }
 
     /** Options whose root and configuration come from walking up ({@link RepositoryLayout#discover}). */
     public RunOptions(RepositoryLayout layout, Optional<Path> config, Optional<String> profile,
             Optional<Severity> failOn, List<Path> catalogues, Optional<Path> baseline) {
-        this(layout.root(), config, profile, failOn, catalogues, baseline, layout.config(), false);
+        this(layout.root(), config, profile, failOn, catalogues, baseline, layout.config(), false,
+                SettingNames.NEUTRAL);
     }
 
     /** The same options, with configured paths that lead outside the root accepted or refused. */
     public RunOptions allowingOutsideRoot(boolean allow) {
-        return new RunOptions(root, config, profile, failOn, catalogues, baseline, foundConfig, allow);
+        return new RunOptions(root, config, profile, failOn, catalogues, baseline, foundConfig, allow, names);
+    }
+
+    /** The same options, named in the front end's words in problems and hints. */
+    public RunOptions namedAs(SettingNames callerNames) {
+        return new RunOptions(root, config, profile, failOn, catalogues, baseline, foundConfig, allowOutsideRoot,
+                callerNames);
     }
 
     /** Nothing but the root. */

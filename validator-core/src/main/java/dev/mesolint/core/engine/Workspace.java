@@ -5,12 +5,16 @@ import dev.mesolint.core.config.FolderRule;
 import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.config.RepositoryConfig;
 import dev.mesolint.core.config.RepositoryConfigReader;
+import dev.mesolint.core.config.SettingNames;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.profile.BuiltInProfiles;
 import dev.mesolint.core.profile.ProfileChoice;
 import dev.mesolint.core.profile.ProfileSet;
 import dev.mesolint.core.programme.Goal;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.ruleset.RuleSetChanges;
+import dev.mesolint.core.ruleset.RuleSetVersion;
+import dev.mesolint.core.ruleset.UpgradeNotice;
 import dev.mesolint.core.yaml.YamlLimits;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -42,7 +46,8 @@ public final class Workspace {
     public static Workspace open(RunOptions options, List<? extends RuleDefinition> rules) throws ConfigProblem {
         RepositoryConfig config = readConfig(options);
         Optional<ProfileRef> forced = options.profile()
-                .map(p -> ProfileRef.of(p, Path.of("").toAbsolutePath(), "--profile", null));
+                .map(p -> ProfileRef.of(p, Path.of("").toAbsolutePath(), options.names().of(SettingNames.PROFILE),
+                        null));
         List<ProfileRef> refs = new ArrayList<>();
         forced.ifPresent(refs::add);
         config.profile().ifPresent(refs::add);
@@ -84,17 +89,18 @@ public final class Workspace {
         if (options.config().isPresent()) {
             Path file = options.config().get();
             if (!Files.isRegularFile(file)) {
-                throw new ConfigProblem("--config", null, "no configuration file at " + file,
-                        "check the path, or leave --config out to use " + RepositoryConfig.FILE_NAME
-                                + " in the root folder");
+                String setting = options.names().of(SettingNames.CONFIG);
+                throw new ConfigProblem(setting, null, "no configuration file at " + file,
+                        "check the path, or leave " + setting + " out to use the nearest " + RepositoryConfig.FILE_NAME
+                                + " above the checked paths");
             }
             return RepositoryConfigReader.read(file, ProgrammeFiles.display(options.root(), file), options.root(),
-                    options.allowOutsideRoot());
+                    options.allowOutsideRoot(), options.names());
         }
         Optional<Path> found = options.foundConfig().filter(Files::isRegularFile);
         return found.isPresent()
                 ? RepositoryConfigReader.read(found.get(), ProgrammeFiles.display(options.root(), found.get()),
-                        options.root(), options.allowOutsideRoot())
+                        options.root(), options.allowOutsideRoot(), options.names())
                 : RepositoryConfig.NONE;
     }
 
@@ -112,6 +118,18 @@ public final class Workspace {
     /** The baseline file to compare with: the option, else the configuration's. */
     public Optional<Path> baselineFile() {
         return options.baseline().or(config::baseline);
+    }
+
+    /**
+     * What to tell the user when the configuration records another rule-set version than this mesolint applies
+     * (the versions between and their changelog entries); empty when it records none or the same.
+     */
+    public Optional<List<String>> upgradeNotice() {
+        if (config.rulesVersion().isEmpty() || config.file().isEmpty()) {
+            return Optional.empty();
+        }
+        return UpgradeNotice.lines(config.rulesVersion().get(), RuleSetVersion.current(),
+                ProgrammeFiles.display(options.root(), config.file().get()), RuleSetChanges.shipped());
     }
 
     public RepositoryConfig config() {

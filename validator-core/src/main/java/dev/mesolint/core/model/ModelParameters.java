@@ -34,7 +34,7 @@ import java.util.Objects;
  * @param restPauseMiniSetReps      reps of each rest-pause mini-set; 3 (1..10)
  * @param restPausePauseSeconds     pause before each rest-pause mini-set; 20 s (5..60)
  * @param sessionPlateauSets        c: a session's effective sets level off towards c, g(x) = x / (1 + (x/c)^m)^(1/m);
- *                                  11 (6..20)
+ *                                  8.5 (6..20)
  * @param sessionPlateauSharpness   m: how sharply a session's effective sets level off; 3 (1..8)
  * @param weeklyDoseExponent        p: weekly stimulus = (sum of the sessions' effective sets)^p; ln 2 / ln 6 = 0.387
  *                                  (0.2..0.8): six sets twice one, at any number of sessions

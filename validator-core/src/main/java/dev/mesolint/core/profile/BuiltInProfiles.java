@@ -43,7 +43,7 @@ public final class BuiltInProfiles {
             if (p.parent().map(ref -> ref.isFile() || !NAMES.contains(ref.text())).orElse(false)) {
                 throw new IllegalStateException("the built-in profile " + name + " extends a non-built-in profile");
             }
-            return new Profile(p.name(), p.parent(), p.description(), p.rules(), SOURCE);
+            return new Profile(p.name(), p.parent(), p.description(), p.rules(), p.model(), SOURCE);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (ConfigProblem e) {

@@ -5,14 +5,20 @@ import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.ModelParameters;
+import dev.mesolint.core.model.NamedModelParameters;
+import dev.mesolint.core.model.OneRepMaxRelation;
+import dev.mesolint.core.model.ParameterBound;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleParameter;
 import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.yaml.Pointers;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -23,7 +29,8 @@ import tools.jackson.databind.JsonNode;
  * checked here, so a profile that loads can always be applied.
  */
 public final class ProfileReader {
-    static final List<String> KEYS = List.of("profile", "extends", "description", "rules");
+    static final List<String> KEYS = List.of("profile", "extends", "description", "rules", "model");
+    private static final String MODEL_DOC = "docs/model.md, section 6, lists them with their bounds";
     static final String NAME_PATTERN = "[a-z][a-z0-9]*(-[a-z0-9]+)*";
 
     /** Rules that report files which could not be loaded: their severity is fixed, or a broken file could pass. */
@@ -78,7 +85,76 @@ public final class ProfileReader {
                 overrides.put(e.getKey(), override(doc, e.getKey(), e.getValue()));
             }
         }
-        return new Profile(name, parent, description, overrides, doc.shown());
+        return new Profile(name, parent, description, overrides, model(doc, root.get("model")), doc.shown());
+    }
+
+    /**
+     * The {@code model:} block: training-model parameters by the names docs/model.md gives them, each checked
+     * against its bounds here, so a wrong one is located at its value.
+     */
+    private static ModelOverride model(ConfigDocument doc, JsonNode node) throws ConfigProblem {
+        if (node == null || node.isNull()) {
+            return ModelOverride.NONE;
+        }
+        doc.mapping(node, "/model", "model", "model: {recoveryTimeConstantSeconds: 120}");
+        Map<String, Object> values = new LinkedHashMap<>();
+        for (Map.Entry<String, JsonNode> e : node.properties()) {
+            String key = e.getKey();
+            String at = Pointers.child("/model", key);
+            Optional<NamedModelParameters.Kind> kind = NamedModelParameters.kind(key);
+            if (kind.isEmpty()) {
+                throw doc.problemAtKey(at, "unknown model parameter '" + key + "'", closestModelName(key)
+                        .map(k -> "did you mean '" + k + "'? ").orElse("") + MODEL_DOC);
+            }
+            values.put(key, modelValue(doc, e.getValue(), at, key, kind.get()));
+        }
+        return new ModelOverride(values, Optional.of(doc.keyAt("/model")));
+    }
+
+    /** A near name, or one that starts the same way: camelCase names are long and have no hyphens to split on. */
+    private static Optional<String> closestModelName(String key) {
+        String wanted = key.toLowerCase(Locale.ROOT);
+        return ConfigDocument.closest(key, NamedModelParameters.names()).or(() -> NamedModelParameters.names()
+                .stream().filter(n -> n.toLowerCase(Locale.ROOT).startsWith(wanted)
+                        || wanted.startsWith(n.toLowerCase(Locale.ROOT))).findFirst());
+    }
+
+    private static Object modelValue(ConfigDocument doc, JsonNode node, String at, String name,
+            NamedModelParameters.Kind kind) throws ConfigProblem {
+        Object byDefault = NamedModelParameters.value(ModelParameters.defaults(), name);
+        String text = doc.scalar(node, at, name + ": " + byDefault).strip();
+        if (kind == NamedModelParameters.Kind.RELATION) {
+            List<String> names = Arrays.stream(OneRepMaxRelation.values())
+                    .map(r -> r.name().toLowerCase(Locale.ROOT)).toList();
+            if (!names.contains(text.toLowerCase(Locale.ROOT))) {
+                throw doc.problemAt(at, "model " + name + " '" + text + "' is not a 1RM relation", "one of: "
+                        + String.join(", ", names));
+            }
+            return OneRepMaxRelation.valueOf(text.toUpperCase(Locale.ROOT));
+        }
+        double value;
+        try {
+            value = Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            throw doc.problemAt(at, "model " + name + " '" + text + "' is not a number", "write e.g. " + name + ": "
+                    + byDefault + " (in the unit its name says: seconds, minutes, reps, a share of 1RM)");
+        }
+        ParameterBound bound = ModelParameters.BOUNDS.get(name);
+        boolean whole = kind == NamedModelParameters.Kind.WHOLE_NUMBER;
+        if (whole && value != Math.rint(value)) {
+            throw doc.problemAt(at, "model " + name + " " + text + " is not a whole number", "write a whole number "
+                    + "from " + shown(bound.min()) + " to " + shown(bound.max()));
+        }
+        if (!bound.contains(value)) {
+            throw doc.problemAt(at, "model " + name + " " + text + " is outside " + shown(bound.min()) + ".."
+                    + shown(bound.max()), "choose a value from " + shown(bound.min()) + " to " + shown(bound.max())
+                    + " (" + MODEL_DOC + ")");
+        }
+        return whole ? (Object) Integer.valueOf((int) value) : (Object) Double.valueOf(value);
+    }
+
+    private static String shown(double v) {
+        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
     }
 
     private RuleOverride override(ConfigDocument doc, String id, JsonNode node) throws ConfigProblem {

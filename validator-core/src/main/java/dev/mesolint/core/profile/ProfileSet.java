@@ -3,6 +3,7 @@ package dev.mesolint.core.profile;
 import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
+import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
 import java.nio.file.Path;
@@ -120,7 +121,25 @@ public final class ProfileSet {
             settings.put(rule.id(), s);
         }
         return new ResolvedProfile(profile.name(), profile.description(), profile.source(),
-                chain.stream().map(Profile::name).toList(), settings);
+                chain.stream().map(Profile::name).toList(), settings, model(chain));
+    }
+
+    /** The defaults with each profile's {@code model:} values applied, from the root of the chain down. */
+    private static ModelParameters model(List<Profile> chain) throws ConfigProblem {
+        ModelParameters model = ModelParameters.defaults();
+        for (int i = chain.size() - 1; i >= 0; i--) {
+            Profile p = chain.get(i);
+            try {
+                model = p.model().applyTo(model);
+            } catch (IllegalArgumentException e) {
+                // Each value is within its bounds (the reader checked); only a combination can fail here.
+                throw new ConfigProblem(p.source(), p.model().at().orElse(null), "the model parameters of profile '"
+                        + p.name() + "' do not fit together: " + e.getMessage(), "keep the intensity zone bounds "
+                        + "rising (intensityZone1From < intensityZone2From < intensityZone3From < "
+                        + "intensityZone4From), counting the values the profile inherits");
+            }
+        }
+        return model;
     }
 
     private static String nameOf(ProfileRef ref, Collection<String> names, Map<Path, String> files)

@@ -75,6 +75,12 @@ public record RuleParameter(String name, Kind kind, double defaultValue, double 
         };
     }
 
+    /** The value as a sentence reads it: {@code 3 min}, {@code 60 s}, {@code 10%}, {@code 1.5}. */
+    public String display(double value) {
+        return kind == Kind.DURATION ? Durations.format(java.time.Duration.ofMillis(Math.round(value * 1000)))
+                : format(value);
+    }
+
     private static String trim(double v) {
         return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(Math.round(v * 1000) / 1000.0);
     }

@@ -16,6 +16,11 @@ public final class Thresholds {
         }).toList();
     }
 
+    /** The rule's summary with the thresholds in force under {@code settings} (a profile's, say). */
+    public static String summary(RuleMetadata rule, RuleSettings settings) {
+        return rule.summary(p -> settings.value(p.name()));
+    }
+
     /** {@code min-rest 3min (default 2min), min-rest-squat-hinge 3min}, or empty for a rule without parameters. */
     public static String line(RuleMetadata rule, RuleSettings settings) {
         return String.join(", ", of(rule, settings));

@@ -19,7 +19,7 @@ public final class FarFromFailureRule implements Rule {
     static final String MIN_RIR = "min-rir";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Working sets that stop 5 or more reps short of failure give next to no stimulus.", Severity.WARNING,
+            "Working sets that stop {min-rir} or more reps short of failure give next to no stimulus.", Severity.WARNING,
             RuleMetadata.Category.EFFORT,
             parameters(),
             "Growth comes mostly from the last reps before failure, when every motor unit is working and the bar "

@@ -29,8 +29,9 @@ public final class FatigueTechniqueRule implements Rule {
     static final String MAX_RECRUITMENT = "max-next-recruitment";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Drop sets and rest-pause sets that more sets for the same muscle follow in the session, and supersets "
-                    + "in which an item comes right after one with the same prime mover.", Severity.WARNING,
+            "Drop sets and rest-pause sets that more sets for the same muscle follow in the session, starting under "
+                    + "{max-next-recruitment} of a fresh set's recruitment, and supersets in which an item comes right "
+                    + "after one with the same prime mover.", Severity.WARNING,
             RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.percent(MAX_RECRUITMENT, 0.90, 0.5, 1.0,
                     "A technique set is reported when the next set for its muscle starts below this share of a "

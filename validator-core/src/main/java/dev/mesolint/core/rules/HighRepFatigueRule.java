@@ -38,8 +38,9 @@ public final class HighRepFatigueRule implements Rule {
     static final String MAX_RIR = "max-rir";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Sets taken to RIR 2 or closer with reps + RIR of 15 or more on compound lifts (warning) or 20 or more "
-                    + "on isolation lifts (info); one finding per exercise.",
+            "Sets taken to RIR {max-rir} or closer with reps + RIR of {min-effort-reps} or more on compound lifts "
+                    + "(warning) or {min-effort-reps-isolation} or more on isolation lifts (info); one finding per "
+                    + "exercise.",
             Severity.WARNING, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.integer(MIN_EFFORT_REPS, 15, 8, 40,
                             "Reps plus reps in reserve (the set's reps to failure) from which a set of a compound "

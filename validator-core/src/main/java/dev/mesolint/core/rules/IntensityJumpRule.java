@@ -35,8 +35,8 @@ public final class IntensityJumpRule implements Rule {
     private static final int SESSIONS_BEFORE = 3;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A lift's top set rises by at most 10 points of 1RM over the heaviest of its last three sessions (deload "
-                    + "weeks left out).",
+            "A lift's top set rises by at most {max-step} of 1RM, in percentage points, over the heaviest of its "
+                    + "last three sessions (deload weeks left out).",
             Severity.WARNING, RuleMetadata.Category.EFFORT,
             List.of(RuleParameter.percent(MAX_STEP, 0.10, 0.025, 0.5,
                     "Largest rise of a lift's top-set share of 1RM over the heaviest top set of its last three "

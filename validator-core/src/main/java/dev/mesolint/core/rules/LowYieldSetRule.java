@@ -25,7 +25,7 @@ public final class LowYieldSetRule implements Rule {
     private static final double LONG_REST_SECONDS = 180;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Sets whose fatigue-adjusted stimulus is under 30% of what the same set gives fresh, with the cause "
+            "Sets whose fatigue-adjusted stimulus is under {min-share} of what the same set gives fresh, with the cause "
                     + "(earlier sets, short rest).",
             Severity.INFO, RuleMetadata.Category.FATIGUE,
             List.of(RuleParameter.percent(MIN_SHARE, 0.30, 0.05, 0.9,

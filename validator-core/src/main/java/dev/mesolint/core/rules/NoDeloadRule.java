@@ -15,7 +15,7 @@ public final class NoDeloadRule implements Rule {
     static final String MAX_WEEKS = "max-weeks";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "More than 6 weeks in a row without a deload week, for intermediate and advanced lifters.", Severity.INFO,
+            "More than {max-weeks} weeks in a row without a deload week, for intermediate and advanced lifters.", Severity.INFO,
             RuleMetadata.Category.RECOVERY,
             List.of(RuleParameter.integer(MAX_WEEKS, 6, 2, 16,
                     "Most weeks in a row without a week marked deload: true.")),

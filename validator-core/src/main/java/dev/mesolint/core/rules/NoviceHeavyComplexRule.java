@@ -21,8 +21,8 @@ public final class NoviceHeavyComplexRule implements Rule {
     static final String MAX_EFFORT_REPS = "max-effort-reps";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A novice programme keeps high-skill lifts (catalogue skill: high) lighter than reps + RIR of 6 (about "
-                    + "85% of 1RM and up).",
+            "A novice programme keeps sets of high-skill lifts (catalogue skill: high) lighter than a "
+                    + "{max-effort-reps}-rep max (reps + RIR above {max-effort-reps}).",
             Severity.WARNING, RuleMetadata.Category.SAFETY,
             List.of(RuleParameter.integer(MAX_EFFORT_REPS, 6, 1, 15,
                     "Reps plus reps in reserve (the set's reps to failure) at or below which a set of a high-skill "

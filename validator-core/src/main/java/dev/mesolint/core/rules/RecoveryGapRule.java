@@ -26,7 +26,7 @@ public final class RecoveryGapRule implements Rule {
     private static final int DAYS_PER_WEEK = 7;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A muscle trained with 4 or more hard sets in two sessions is given at least 48 h between them.",
+            "A muscle trained with {min-sets} or more hard sets in two sessions is given at least {min-hours} h between them.",
             Severity.WARNING, RuleMetadata.Category.RECOVERY,
             List.of(RuleParameter.integer(MIN_HOURS, 48, 12, 168,
                             "Fewest hours between two sessions that both train a muscle hard (24 h per day)."),

@@ -22,7 +22,7 @@ public final class SessionMuscleVolumeRule implements Rule {
     static final String MAX_SETS = "max-sets";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "No muscle gets more than 10 credited hard sets in one session.", Severity.WARNING,
+            "No muscle gets more than {max-sets} credited hard sets in one session.", Severity.WARNING,
             RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_SETS, 10, 4, 30,
                     "Most credited hard sets for one muscle in one session (prime mover 1, synergist 0.5).")),

@@ -18,7 +18,8 @@ public final class SessionTimeRule implements Rule {
     static final String SESSION_MINUTES = "session-minutes";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "The estimated length of each session stays within the programme's session-minutes.", Severity.WARNING,
+            "The estimated length of each session stays within the programme's session-minutes "
+                    + "({session-minutes} minutes when it states none).", Severity.WARNING,
             RuleMetadata.Category.TIME,
             List.of(RuleParameter.integer(SESSION_MINUTES, 90, 10, 300,
                     "The time budget per session when the programme states no session-minutes of its own.")),

@@ -22,9 +22,9 @@ public final class ShortRestCompoundRule implements Rule {
     static final String MIN_REST_ASSISTANCE = "min-rest-assistance";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Rest after a compound set that more work in the session follows is at least 2 min (in the strength "
-                    + "profile: 3 min after main squat and hinge lifts, 2 min after other main lifts and power work, "
-                    + "1 min after assistance work).",
+            "Rest after a compound set that more work in the session follows is at least {min-rest} after main "
+                    + "lifts and power work, {min-rest-squat-hinge} after main squat and hinge lifts and "
+                    + "{min-rest-assistance} after assistance work.",
             Severity.WARNING, RuleMetadata.Category.REST,
             List.of(RuleParameter.seconds(MIN_REST, 120, 30, 600,
                             "Shortest rest after a compound set of a main lift (or ballistic power work) that more "

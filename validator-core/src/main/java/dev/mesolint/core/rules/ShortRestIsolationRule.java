@@ -13,7 +13,7 @@ public final class ShortRestIsolationRule implements Rule {
     static final String MIN_REST = "min-rest";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "Rest after an isolation set that more work in the session follows is at least 60 s.",
+            "Rest after an isolation set that more work in the session follows is at least {min-rest}.",
             Severity.INFO, RuleMetadata.Category.REST,
             List.of(RuleParameter.seconds(MIN_REST, 60, 15, 300,
                     "Shortest rest after an isolation set that more work follows.")),

@@ -16,7 +16,8 @@ public final class SlowConcentricRule implements Rule {
     static final String SLOW_LIFTING = "slow-lifting";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A tempo whose lifting phase is 4 s or slower on purpose: it lowers effort, it does not raise stimulus.",
+            "A tempo whose lifting phase is {slow-lifting} or slower on purpose: it lowers effort, it does not raise "
+                    + "stimulus.",
             Severity.INFO, RuleMetadata.Category.EFFORT,
             List.of(RuleParameter.seconds(SLOW_LIFTING, 4, 2, 10,
                     "Lifting phases this long or longer are reported.")),

@@ -32,8 +32,9 @@ public final class VolumeSpikeRule implements Rule {
     static final String MIN_BASELINE_WEEKS = "min-baseline-weeks";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A muscle's weekly working sets stay within 1.5 x the mean of up to four non-deload weeks before, for "
-                    + "muscles the programme trains directly.",
+            "A muscle's weekly working sets stay within {max-ratio} x the mean of the non-deload weeks before (at "
+                    + "least {min-baseline-weeks} of them; rises of fewer than {min-added-sets} sets are not "
+                    + "reported), for muscles the programme trains directly.",
             Severity.WARNING, RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_RATIO, 1.5, 1.1, 4,
                             "Largest ratio of a week's working sets for a muscle to the mean of the non-deload weeks "

@@ -33,7 +33,8 @@ public final class WeeklyVolumeMaxRule implements Rule, WeeklyVolumeLimit {
             Muscle.HAMSTRINGS, Muscle.LOWER_BACK);
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "No muscle gets more than 20 credited hard sets in a week.", Severity.WARNING,
+            "No muscle gets more than {max-sets} credited hard sets in a week ({max-sets-competition-lifts} for "
+                    + "the prime movers of the squat, bench press and deadlift).", Severity.WARNING,
             RuleMetadata.Category.VOLUME,
             List.of(RuleParameter.number(MAX_SETS, 20, 8, 60,
                             "Most credited hard sets for one muscle in a week (prime mover 1, synergist 0.5)."),

@@ -36,9 +36,9 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     static final String MAX_RIR = "max-rir";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A muscle the programme trains directly (a prime mover of one of its exercises) gets at least 4 credited "
-                    + "hard sets a week; deload weeks are skipped, and the weeks a muscle falls short in are one "
-                    + "finding.",
+            "A muscle the programme trains directly (a prime mover of one of its exercises) gets at least "
+                    + "{min-sets} credited sets a week done at RIR {max-rir} or closer; deload weeks are skipped, and "
+                    + "the weeks a muscle falls short in are one finding.",
             Severity.INFO, RuleMetadata.Category.VOLUME,
             parameters(),
             "Weekly sets per muscle drive growth, and the dose-response meta-analyses find small effects at the "

@@ -36,8 +36,7 @@ public final class SafeFiles {
         if (!real.startsWith(realRoot)) {
             throw new FileRefusedException("it lies outside the repository root " + realRoot.getFileName()
                     + (real.equals(file.toAbsolutePath().normalize()) ? "" : " once its links are resolved"),
-                    "keep the file inside the repository, or pass --allow-outside-root (plugin: allowOutsideRoot)"
-                            + " when that is intended");
+                    "keep the file inside the repository");
         }
         return real;
     }

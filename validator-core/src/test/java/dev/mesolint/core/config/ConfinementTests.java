@@ -32,6 +32,22 @@ class ConfinementTests {
         assertTrue(p.describe().contains("outside the repository root"), p.describe());
         assertTrue(p.describe().contains(":1:14"), "located at the list entry: " + p.describe());
         assertFalse(p.describe().contains(SECRET));
+        assertFalse(p.describe().contains("--"), "no command-line option in the core's own words: " + p.describe());
+    }
+
+    @Test
+    void theHintNamesTheCallersSettingThatAcceptsThePathWhenItHasOne(@TempDir Path dir) throws Exception {
+        Path root = repo(dir, "catalogues: [../outside.yaml]\n");
+        SettingNames cli = SettingNames.of(java.util.Map.of(SettingNames.ALLOW_OUTSIDE_ROOT, "--allow-outside-root"));
+        ConfigProblem p = assertThrows(ConfigProblem.class, () -> RepositoryConfigReader.read(
+                root.resolve(RepositoryConfig.FILE_NAME), ".mesolint.yaml", root, false, cli));
+        assertTrue(p.hint().endsWith("keep the file inside the repository, or pass --allow-outside-root when that is "
+                + "intended"), p.hint());
+        ConfigProblem none = assertThrows(ConfigProblem.class, () -> RepositoryConfigReader.read(
+                root.resolve(RepositoryConfig.FILE_NAME), ".mesolint.yaml", root, false,
+                SettingNames.of(java.util.Map.of())));
+        assertEquals("keep the file inside the repository", none.hint(), "a caller without the setting is not "
+                + "told to pass it");
     }
 
     @Test

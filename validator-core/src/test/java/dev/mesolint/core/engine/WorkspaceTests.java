@@ -161,7 +161,15 @@ class WorkspaceTests {
         ConfigProblem missing = assertThrows(ConfigProblem.class, () -> open(new RunOptions(root,
                 Optional.of(root.resolve("nope.yaml")), Optional.empty(), Optional.empty(), List.of(),
                 Optional.empty())));
-        assertTrue(missing.describe().startsWith("--config: no configuration file at"), missing.describe());
+        // The core names the setting in the caller's words; without any, in neutral ones.
+        assertTrue(missing.describe().startsWith("the config setting: no configuration file at"), missing.describe());
+        ConfigProblem named = assertThrows(ConfigProblem.class, () -> open(new RunOptions(root,
+                Optional.of(root.resolve("nope.yaml")), Optional.empty(), Optional.empty(), List.of(),
+                Optional.empty()).namedAs(dev.mesolint.core.config.SettingNames.of(java.util.Map.of(
+                        dev.mesolint.core.config.SettingNames.CONFIG, "config (mesolint.config)")))));
+        assertTrue(named.describe().startsWith("config (mesolint.config): no configuration file at"),
+                named.describe());
+        assertTrue(named.hint().contains("leave config (mesolint.config) out"), named.hint());
     }
 
     private ConfigProblem problem(String config) {
@@ -173,7 +181,7 @@ class WorkspaceTests {
     void badConfigurationIsALocatedErrorWithAFix() {
         assertEquals(".mesolint.yaml:2:1: unknown key 'fail-level' in the repository configuration (fix: did you "
                 + "mean 'fail-on'? known keys: profile, goals, folders, catalogues, fail-on, baseline, root, "
-                + "plate-increment)",
+                + "plate-increment, rules-version)",
                 problem("profile: strength\nfail-level: warning\n").describe());
         assertEquals(".mesolint.yaml:1:10: fail-on 'sometimes' is not a level (fix: one of: error, warning, info)",
                 problem("fail-on: sometimes\n").describe());

@@ -1,9 +1,13 @@
 package dev.mesolint.core.rules;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
 import java.lang.reflect.Field;
 import java.lang.reflect.Modifier;
@@ -48,5 +52,37 @@ class BuiltInRulesTests {
                 assertTrue(p.description().endsWith("."), m.id() + " " + p.name() + " description is a sentence");
             }
         }
+    }
+
+    /**
+     * A summary writes each threshold as its parameter, so it reads true under every profile: no number stands in
+     * its text but "1RM", no profile is named, and a parameter set to another value shows that value.
+     */
+    @Test
+    void summariesAreRenderedFromTheParametersNotWrittenWithTheirValues() {
+        for (RuleDefinition r : rules) {
+            RuleMetadata m = r.metadata();
+            String literal = m.summaryTemplate().replaceAll("\\{[a-z0-9-]+}", "").replace("1RM", "");
+            if (!m.parameters().isEmpty()) {
+                assertFalse(literal.matches("(?s).*\\d.*"), m.id() + ": a number in the summary's own words, write "
+                        + "it as {parameter}: " + m.summaryTemplate());
+            }
+            assertFalse(literal.contains("profile"), m.id() + ": the summary names a profile: " + m.summaryTemplate());
+            for (RuleParameter p : m.parameters()) {
+                if (m.summaryTemplate().contains("{" + p.name() + "}")) {
+                    String moved = m.summary(q -> q == p ? (p.min() + p.max()) / 2 : q.defaultValue());
+                    assertTrue(moved.contains(p.display((p.min() + p.max()) / 2)), m.id() + " " + p.name() + ": "
+                            + moved);
+                }
+            }
+        }
+    }
+
+    @Test
+    void aSummaryNamingAParameterTheRuleLacksIsRefused() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new RuleMetadata("demo-rule",
+                "More than {max-weeks} weeks.", Severity.INFO, RuleMetadata.Category.RECOVERY, List.of(),
+                "A rationale long enough.", "common practice"));
+        assertTrue(e.getMessage().contains("{max-weeks}"), e.getMessage());
     }
 }
