@@ -179,7 +179,7 @@ final class CheckCommand implements Callable<Integer> {
                 }
                 inputs = selected.get();
             }
-            request = workspace.request(inputs);
+            request = workspace.request(inputs).keepingFigures(CacheOptions.needFigures(reports, stdoutFormat));
             Optional<String> uncached = cache.notUsed(reports, stdoutFormat);
             if (piped.isEmpty() && uncached.isEmpty()) {
                 // Unchanged files cost one read and one hash; the checker is only built when some file changed.

@@ -173,7 +173,8 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         boolean reportOnly = "none".equalsIgnoreCase(failOn == null ? "" : failOn.trim());
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
-                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
+                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare()
+                .keepingFigures(figures);
         prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
         Optional<List<String>> notice = prepared.workspace().upgradeNotice();
         if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {

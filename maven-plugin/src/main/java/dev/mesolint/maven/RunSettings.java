@@ -39,6 +39,11 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
     /** Everything a run needs, the cache key and, for the debug log, where each setting came from. */
     record Prepared(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, ConfigurationKey key,
             List<String> sources, RunOptions options) {
+
+        /** The same run, its file reports keeping the training figures only when a report shows them. */
+        Prepared keepingFigures(boolean keep) {
+            return new Prepared(workspace, request.keepingFigures(keep), rules, key, sources, options);
+        }
     }
 
     Prepared prepare() throws MojoExecutionException {
