@@ -322,6 +322,10 @@ final class CheckCommand implements Callable<Integer> {
             err.println("mesolint: the cache could not be saved (" + SafeText.line(String.valueOf(e.getMessage()))
                     + "); the results of this run are complete");
         }
+        if (!output.quiet && store.rejectedEntries() > 0) {
+            err.println("mesolint: cache: " + store.rejectedEntries() + " damaged entr"
+                    + (store.rejectedEntries() == 1 ? "y" : "ies") + " (checksum failed) ignored");
+        }
         if (!output.quiet) {
             err.println("mesolint: cache: " + outcome.reused() + " unchanged programme" + (outcome.reused() == 1 ? ""
                     : "s") + " reused, " + outcome.checked() + " checked");

@@ -44,6 +44,8 @@ final class CheckExecution {
         Optional<ResultCache> cache = cacheFile.map(f -> ResultCache.open(f, prepared.key()));
         cache.flatMap(ResultCache::discarded).ifPresent(why -> log.debug("mesolint: not reusing earlier results: "
                 + why));
+        cache.filter(c -> c.rejectedEntries() > 0).ifPresent(c -> log.info("mesolint: " + c.rejectedEntries()
+                + " cache entr" + (c.rejectedEntries() == 1 ? "y" : "ies") + " failed the checksum; checked afresh"));
         CachedCheck.Outcome outcome;
         try {
             outcome = new CachedCheck(prepared.request(), prepared.rules()).run(cache);
