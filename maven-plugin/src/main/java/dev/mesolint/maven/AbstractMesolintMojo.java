@@ -6,6 +6,7 @@ import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import java.io.File;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -149,6 +150,15 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     @Parameter(property = "mesolint.noReasons", defaultValue = "false")
     boolean noReasons;
 
+    /**
+     * Let a run that finds no programme file pass. By default it fails the build, so a misnamed folder, a glob that
+     * matches nothing or a link that leads nowhere cannot pass in silence.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.allowEmpty", defaultValue = "false")
+    boolean allowEmpty;
+
     /** Paths in findings are shown relative to this folder. */
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     File basedir;
@@ -192,7 +202,31 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
                     reportFolder().toPath(), !noReasons, !ignoreBaseline
                     && prepared.workspace().baselineFile().isPresent() || newSince != null);
         }
+        if (outcome.report().nothingChecked()) {
+            emptyRun();
+        }
         afterCheck(outcome, reportOnly);
+    }
+
+    /** A run that checked no programme: a build error unless {@code allowEmpty}; said either way. */
+    private void emptyRun() throws MojoExecutionException {
+        String where = "no programme file (*.yaml, *.yml) found in " + shown(programmes)
+                + (includes == null || includes.isEmpty() ? "" : " matching includes " + includes)
+                + (excludes == null || excludes.isEmpty() ? "" : " outside excludes " + excludes);
+        if (!allowEmpty) {
+            throw new MojoExecutionException("mesolint: " + where + ": nothing was checked; check programmes "
+                    + "(mesolint.programmes), includes and excludes, or set allowEmpty (mesolint.allowEmpty) when "
+                    + "that is expected");
+        }
+        getLog().info("mesolint: " + where + ": nothing was checked (allowEmpty)");
+    }
+
+    /** A path as the user wrote it in the POM's terms: relative to the project folder when it is inside it. */
+    private String shown(File file) {
+        Path base = basedir.toPath().toAbsolutePath().normalize();
+        Path path = file.toPath().toAbsolutePath().normalize();
+        return path.startsWith(base) && !path.equals(base) ? base.relativize(path).toString().replace('\\', '/')
+                : path.toString();
     }
 
     /** The report formats this goal writes, as configured. */
