@@ -36,7 +36,7 @@ gen "$work/large" large
 gen "$work/many" clean "$many_n" "${templates[@]}"
 
 # The same JVM flags for the floor and the check, as the launcher passes them.
-jvm=(java -XX:TieredStopAtLevel=1 -Xshare:auto)
+jvm=(java -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto)
 floor_cmd=("${jvm[@]}" -cp "$bench" dev.mesolint.bench.ParseFloor 2)
 check_cmd=("${jvm[@]}" -jar "$cli" check)
 
@@ -86,7 +86,7 @@ echo "speedup 1 -> 2: floor ${floor_gain}x, check ${check_gain}x ($(awk -v a="$c
 echo
 echo "memory: 10,000 files with -Xmx256m"
 : >"$tmp/m"
-/usr/bin/time -f "%e s wall, %M KB peak" -o "$tmp/m" java -Xmx256m -XX:TieredStopAtLevel=1 -jar "$cli" check "$work/many" >/dev/null 2>"$tmp/err" && rc=0 || rc=$?
+/usr/bin/time -f "%e s wall, %M KB peak" -o "$tmp/m" java -Xmx256m -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -jar "$cli" check "$work/many" >/dev/null 2>"$tmp/err" && rc=0 || rc=$?
 echo "exit $rc, $(cat "$tmp/m")$(grep -q OutOfMemory "$tmp/err" && echo ', OUT OF MEMORY' || true)"
 
 echo

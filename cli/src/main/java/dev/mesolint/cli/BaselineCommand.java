@@ -65,7 +65,7 @@ final class BaselineCommand implements Callable<Integer> {
             InstalledRules installed = Installed.rules();
             // Recorded as found: a baseline is never compared with itself.
             RunResult result = CheckRun.run(RunRequest.of(options.toRunOptions(paths, catalogues.files,
-                    Optional.empty(), Optional.empty()), paths).withoutBaseline(), installed.rules());
+                    Optional.empty(), Optional.empty()), paths).withoutBaseline().withFigures(false), installed.rules());
             Workspace workspace = result.workspace();
             RunReport report = result.report();
             if (!report.missing().isEmpty()) {

@@ -3,6 +3,7 @@ package dev.mesolint.cli;
 import dev.mesolint.core.cache.CacheLocation;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
+import dev.mesolint.core.report.RunReports;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -32,6 +33,12 @@ final class CacheOptions {
     Path location;
 
     /** Why the cache is not used for a run writing {@code reports} and {@code stdout}; empty when it is used. */
+    /** Whether a report of this run shows the training figures, so that each file's report must keep them. */
+    static boolean needFigures(List<ReportTarget> reports, ReportFormat stdout) {
+        return Stream.concat(reports.stream().map(ReportTarget::format), Stream.of(stdout))
+                .anyMatch(RunReports::needsFigures);
+    }
+
     Optional<String> notUsed(List<ReportTarget> reports, ReportFormat stdout) {
         if (!enabled) {
             return Optional.of("off");

@@ -156,7 +156,8 @@ final class CheckCommand implements Callable<Integer> {
             installed = Installed.rules();
             RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
                     Optional.ofNullable(baseline));
-            RunRequest request = RunRequest.of(runOptions, piped.isPresent() ? List.of() : paths);
+            RunRequest request = RunRequest.of(runOptions, piped.isPresent() ? List.of() : paths)
+                    .withFigures(CacheOptions.needFigures(reports, stdoutFormat));
             if (piped.isPresent()) {
                 request = request.withPiped(new RunRequest.Piped(piped.get().path(), piped.get().content()));
             }

@@ -175,7 +175,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
                 includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
-        RunRequest request = prepared.request();
+        RunRequest request = prepared.request().withFigures(figures);
         if (useCache() && !figures) {
             request = request.withCache(outputDirectory.toPath().resolve("cache.json"));
         }

@@ -10,9 +10,11 @@ import java.util.List;
  *
  * @param root            paths in findings are shown relative to this folder
  * @param extraCatalogues repository catalogue files added to the built-in catalogue
+ * @param keepFigures     whether each file's report keeps its training-model figures after its rules ran; only the
+ *                        reports that show them (HTML, JSON) need them, and on a large run they are most of the heap
  */
 public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<Path> extraCatalogues,
-        RuleConfiguration configuration, YamlLimits limits) {
+        RuleConfiguration configuration, YamlLimits limits, boolean keepFigures) {
 
     public CheckRequest {
         inputs = List.copyOf(inputs);
@@ -20,6 +22,20 @@ public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<P
         if (failOn == Severity.OFF) {
             throw new IllegalArgumentException("fail level must be error, warning or info");
         }
+    }
+
+    /** A request whose reports keep their figures. */
+    public CheckRequest(List<Path> inputs, Path root, Severity failOn, List<Path> extraCatalogues,
+            RuleConfiguration configuration, YamlLimits limits) {
+        this(inputs, root, failOn, extraCatalogues, configuration, limits, true);
+    }
+
+    /**
+     * This request, with figures kept or dropped once each file's rules ran (findings are the same either way: rules
+     * read the figures while the file is checked).
+     */
+    public CheckRequest keepingFigures(boolean keep) {
+        return new CheckRequest(inputs, root, failOn, extraCatalogues, configuration, limits, keep);
     }
 
     public static CheckRequest of(List<Path> inputs, Path root) {

@@ -174,7 +174,8 @@ public final class Checker {
         FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
         Map<String, Duration> ruleTimes = new RuleRunner(rules, request.configuration()).run(scope);
         ProgrammeIdentity identity = new ProgrammeIdentity(programme.info().id(), document.valueAt("/programme/id"));
-        return new FileReport(shown, Optional.of(programme), profile, scope.findings(), Optional.of(metrics),
+        return new FileReport(shown, Optional.of(programme), profile, scope.findings(),
+                request.keepFigures() ? Optional.of(metrics) : Optional.empty(),
                 new FileTiming(Duration.ZERO, ruleTimes), Optional.of(identity));
     }
 

@@ -48,7 +48,7 @@ public final class CheckRun {
             selection = Optional.of(changed(workspace, all, request.changedSince().get()));
             inputs = selection.get().programmes();
         }
-        CheckRequest checks = workspace.request(inputs);
+        CheckRequest checks = workspace.request(inputs).keepingFigures(request.keepFigures());
         if (selection.isPresent() && inputs.isEmpty()) {
             RunReport none = new RunReport(List.of(), checks.failOn(), List.of());
             return new RunResult(workspace, checks, rules, none, List.of(), RunResult.CacheUse.NONE, selection,

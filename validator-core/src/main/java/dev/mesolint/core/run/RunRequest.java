@@ -18,9 +18,12 @@ import java.util.Optional;
  * @param changedSince  check only the programmes changed since a git revision
  * @param newSince      count only the findings new since a git revision (the safety policy still applies)
  * @param progress      told after each programme file
+ * @param keepFigures   whether each file's report keeps its training figures (only reports that show them need
+ *                      them; findings are the same either way)
  */
 public record RunRequest(RunOptions options, List<Path> inputs, Optional<Piped> piped, Optional<Path> cacheFile,
-        boolean applyBaseline, Optional<ChangedSince> changedSince, Optional<String> newSince, RunProgress progress) {
+        boolean applyBaseline, Optional<ChangedSince> changedSince, Optional<String> newSince, RunProgress progress,
+        boolean keepFigures) {
 
     /** A programme read by the front end, and the path it stands for. */
     public record Piped(Path path, byte[] content) {
@@ -34,38 +37,48 @@ public record RunRequest(RunOptions options, List<Path> inputs, Optional<Piped> 
         inputs = List.copyOf(inputs);
     }
 
-    /** Checks {@code inputs} with the baseline applied, no cache, no selection and nobody told of progress. */
+    /**
+     * Checks {@code inputs} with the baseline applied and the figures kept; no cache, no selection, nobody told of
+     * progress.
+     */
     public static RunRequest of(RunOptions options, List<Path> inputs) {
         return new RunRequest(options, inputs, Optional.empty(), Optional.empty(), true, Optional.empty(),
-                Optional.empty(), RunProgress.NONE);
+                Optional.empty(), RunProgress.NONE, true);
+    }
+
+    /** The same run, its file reports keeping the training figures only when {@code keep}. */
+    public RunRequest withFigures(boolean keep) {
+        return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, newSince, progress,
+                keep);
     }
 
     public RunRequest withPiped(Piped document) {
         return new RunRequest(options, List.of(), Optional.of(document), cacheFile, applyBaseline, changedSince,
-                newSince, progress);
+                newSince, progress, keepFigures);
     }
 
     public RunRequest withCache(Path file) {
         return new RunRequest(options, inputs, piped, Optional.of(file), applyBaseline, changedSince, newSince,
-                progress);
+                progress, keepFigures);
     }
 
     /** Every finding counts, the configuration's baseline too is left alone (and findings are recorded as found). */
     public RunRequest withoutBaseline() {
-        return new RunRequest(options, inputs, piped, cacheFile, false, changedSince, newSince, progress);
+        return new RunRequest(options, inputs, piped, cacheFile, false, changedSince, newSince, progress, keepFigures);
     }
 
     public RunRequest withChangedSince(ChangedSince since) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, Optional.of(since), newSince,
-                progress);
+                progress, keepFigures);
     }
 
     public RunRequest withNewSince(String revision) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, Optional.of(revision),
-                progress);
+                progress, keepFigures);
     }
 
     public RunRequest withProgress(RunProgress listener) {
-        return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, newSince, listener);
+        return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, newSince, listener,
+                keepFigures);
     }
 }
