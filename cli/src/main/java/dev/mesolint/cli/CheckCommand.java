@@ -284,6 +284,10 @@ final class CheckCommand implements Callable<Integer> {
     private void sayCache(RunResult.CacheUse use, java.io.PrintWriter err) {
         use.notSaved().ifPresent(why -> err.println("mesolint: the cache could not be saved (" + SafeText.line(why)
                 + "); the results of this run are complete"));
+        if (!output.quiet && use.rejected() > 0) {
+            err.println("mesolint: cache: " + use.rejected() + " damaged entr" + (use.rejected() == 1 ? "y" : "ies")
+                    + " (checksum failed) ignored");
+        }
         if (!output.quiet && use.used()) {
             err.println("mesolint: cache: " + use.reused() + " unchanged programme" + (use.reused() == 1 ? "" : "s")
                     + " reused, " + use.checked() + " checked");

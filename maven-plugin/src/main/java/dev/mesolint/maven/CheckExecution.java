@@ -47,6 +47,10 @@ final class CheckExecution {
                 .forEach(s -> log.debug("mesolint: " + s));
         RunResult.CacheUse cache = result.cache();
         cache.discarded().ifPresent(why -> log.debug("mesolint: not reusing earlier results: " + why));
+        if (cache.rejected() > 0) {
+            log.info("mesolint: " + cache.rejected() + " cache entr" + (cache.rejected() == 1 ? "y" : "ies")
+                    + " failed the checksum; checked afresh");
+        }
         cache.notSaved().ifPresent(why -> log.warn("mesolint: could not write the result cache "
                 + request.cacheFile().map(Path::toString).orElse("") + ": " + why
                 + "; the next build checks every programme again"));

@@ -71,7 +71,7 @@ public final class CheckRun {
             unreadable = outcome.unreadable();
             if (store.isPresent()) {
                 cache = new RunResult.CacheUse(true, outcome.reused(), outcome.checked(), store.get().discarded(),
-                        save(store.get()));
+                        store.get().rejectedEntries(), save(store.get()));
             }
         }
         if (request.applyBaseline()) {

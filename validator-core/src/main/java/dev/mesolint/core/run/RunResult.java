@@ -24,11 +24,12 @@ public final class RunResult {
      *
      * @param used      false when the run had no cache (everything else is then zero or empty)
      * @param discarded why the stored results could not be reused (another configuration or build, say)
+     * @param rejected  stored entries that failed their checksum (damaged or edited), checked afresh
      * @param notSaved  why this run's results could not be stored; they are complete either way
      */
-    public record CacheUse(boolean used, int reused, int checked, Optional<String> discarded,
+    public record CacheUse(boolean used, int reused, int checked, Optional<String> discarded, int rejected,
             Optional<String> notSaved) {
-        static final CacheUse NONE = new CacheUse(false, 0, 0, Optional.empty(), Optional.empty());
+        static final CacheUse NONE = new CacheUse(false, 0, 0, Optional.empty(), 0, Optional.empty());
     }
 
     private final Workspace workspace;

@@ -78,7 +78,7 @@ class CheckRunTests {
         RunRequest request = RunRequest.of(RunOptions.at(root), List.of(file)).withCache(cache)
                 .withProgress((done, total, findings) -> told.incrementAndGet());
         RunResult first = CheckRun.run(request, rules);
-        assertEquals(new RunResult.CacheUse(true, 0, 1, first.cache().discarded(), Optional.empty()), first.cache());
+        assertEquals(new RunResult.CacheUse(true, 0, 1, first.cache().discarded(), 0, Optional.empty()), first.cache());
         RunResult second = CheckRun.run(request, rules);
         assertEquals(1, second.cache().reused());
         assertEquals(rules(first), rules(second), "reused findings are the same findings");
