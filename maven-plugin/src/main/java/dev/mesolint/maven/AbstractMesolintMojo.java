@@ -1,10 +1,11 @@
 package dev.mesolint.maven;
 
 import dev.mesolint.core.Mesolint;
-import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.run.RunRequest;
+import dev.mesolint.core.run.RunResult;
 import java.io.File;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -183,29 +184,32 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         boolean reportOnly = "none".equalsIgnoreCase(failOn == null ? "" : failOn.trim());
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
-                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare()
-                .keepingFigures(figures);
-        prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
-        Optional<List<String>> notice = prepared.workspace().upgradeNotice();
-        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
-            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
+                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
+        RunRequest request = prepared.request().withFigures(figures);
+        if (useCache() && !figures) {
+            request = request.withCache(outputDirectory.toPath().resolve("cache.json"));
+        }
+        if (ignoreBaseline) {
+            request = request.withoutBaseline();
+        }
+        if (newSince != null && !newSince.isBlank()) {
+            request = request.withNewSince(newSince.trim());
         }
         CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
-        CachedCheck.Outcome outcome = execution.check(useCache() && !figures
-                ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
-        if (newSince != null && !newSince.isBlank()) {
-            outcome = execution.newSince(outcome, newSince.trim());
+        RunResult result = execution.run(request);
+        Optional<List<String>> notice = result.upgradeNotice();
+        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
+            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
         }
         if (!targets.isEmpty()) {
-            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
-                    reportFolder().toPath(), !noReasons, !ignoreBaseline
-                    && prepared.workspace().baselineFile().isPresent() || newSince != null);
+            execution.writeReports(result, Duration.ofNanos(System.nanoTime() - started), targets,
+                    reportFolder().toPath(), !noReasons);
         }
-        if (outcome.report().nothingChecked()) {
+        if (result.report().nothingChecked()) {
             emptyRun();
         }
-        afterCheck(outcome, reportOnly);
+        afterCheck(result, reportOnly);
     }
 
     /** A run that checked no programme: a build error unless {@code allowEmpty}; said either way. */
@@ -245,7 +249,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
      *
      * @param reportOnly {@code failOn} is {@code none}: findings never fail the build
      */
-    abstract void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException,
+    abstract void afterCheck(RunResult result, boolean reportOnly) throws MojoExecutionException,
             MojoFailureException;
 
     private List<ReportTarget> reportTargets() throws MojoExecutionException {
