@@ -163,8 +163,10 @@ class CliTests {
         assertTrue(older.out().contains("0 waived, 2 baselined (1 warning, 1 info)"), older.out());
         assertTrue(older.err().startsWith("mesolint: .mesolint.yaml records rules-version 2026.12.0; this mesolint "
                 + "applies rule set " + Mesolint.RULE_SET_VERSION), older.err());
-        assertTrue(older.err().contains("  " + Mesolint.RULE_SET_VERSION + ": far-from-failure, effort-conflict: "),
+        // Every version after the recorded one is named with its entries: the first and the one applied.
+        assertTrue(older.err().contains("  2026.12.1: far-from-failure, effort-conflict: "),
                 "the changelog's entries, plainly: " + older.err());
+        assertTrue(older.err().contains("  " + Mesolint.RULE_SET_VERSION + ": "), older.err());
         assertEquals(1, older.err().split("records rules-version", -1).length - 1, "said once: " + older.err());
         assertFalse(older.out().contains("records rules-version"), "standard output keeps the report alone");
 

@@ -1,6 +1,6 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.run.RunResult;
 import dev.mesolint.core.report.ConsoleReport;
 import java.util.ArrayList;
 import java.util.List;
@@ -42,8 +42,8 @@ public class ReportMojo extends AbstractMesolintMojo {
     }
 
     @Override
-    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException {
-        getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        CheckExecution.failOnBrokenRun(outcome);
+    void afterCheck(RunResult result, boolean reportOnly) throws MojoExecutionException {
+        getLog().info("mesolint: " + ConsoleReport.summary(result.report()));
+        CheckExecution.failOnBrokenRun(result);
     }
 }

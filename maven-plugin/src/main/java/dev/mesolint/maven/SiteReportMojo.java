@@ -1,6 +1,6 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.run.RunResult;
 import dev.mesolint.core.report.ConsoleReport;
 import java.io.File;
 import java.util.List;
@@ -61,9 +61,9 @@ public class SiteReportMojo extends AbstractMesolintMojo implements MavenReport 
     }
 
     @Override
-    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException {
-        getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        CheckExecution.failOnBrokenRun(outcome);
+    void afterCheck(RunResult result, boolean reportOnly) throws MojoExecutionException {
+        getLog().info("mesolint: " + ConsoleReport.summary(result.report()));
+        CheckExecution.failOnBrokenRun(result);
     }
 
     @Override

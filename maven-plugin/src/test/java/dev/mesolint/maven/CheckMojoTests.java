@@ -200,6 +200,47 @@ class CheckMojoTests {
     }
 
     @Test
+    void aRunThatFindsNoProgrammeFailsTheBuildAndSaysWhy() throws Exception {
+        Files.createDirectories(dir.resolve("programmes/empty-block"));
+        Files.writeString(dir.resolve("programmes/notes.txt"), "not a programme\n");
+        CheckMojo mojo = new MojoFixture(dir).check();
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertEquals("mesolint: no programme file (*.yaml, *.yml) found in programmes: nothing was checked; check "
+                + "programmes (mesolint.programmes), includes and excludes, or set allowEmpty (mesolint.allowEmpty) "
+                + "when that is expected", error.getMessage());
+    }
+
+    @Test
+    void excludesThatLeaveNothingFailTheBuildToo() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.excludes = List.of("**");
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(error.getMessage().startsWith("mesolint: no programme file (*.yaml, *.yml) found in programmes "
+                + "outside excludes [**]: nothing was checked"), error.getMessage());
+    }
+
+    @Test
+    void allowEmptyLetsAnEmptyRunPassAndSaysSo() throws Exception {
+        Files.createDirectories(dir.resolve("programmes"));
+        MojoFixture repo = new MojoFixture(dir);
+        CheckMojo mojo = repo.check();
+        mojo.allowEmpty = true;
+        mojo.execute();
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: no programme file (*.yaml, *.yml) found in programmes: "
+                + "nothing was checked (allowEmpty)"), repo.log.text());
+    }
+
+    @Test
+    void allowEmptyChangesNothingWhenThereAreProgrammes() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.allowEmpty = true;
+        assertThrows(MojoFailureException.class, mojo::execute, "the misspelt exercise still fails the build");
+        assertTrue(repo.log.lines.stream().noneMatch(l -> l.contains("nothing was checked")), repo.log.text());
+    }
+
+    @Test
     void skipDoesNothing() throws Exception {
         MojoFixture repo = repository();
         CheckMojo mojo = repo.check();

@@ -25,7 +25,7 @@ import org.junit.jupiter.api.Test;
 class RuleSetVersionTests {
 
     /** Digest of what the rule set decides, recorded for {@link Mesolint#RULE_SET_VERSION}. */
-    private static final String RECORDED_VERSION = "2026.12.1";
+    private static final String RECORDED_VERSION = "2026.12.2";
     private static final String RECORDED_DIGEST = "80a143b3713d14e0a0233642bfa2b84a5124e9d2e929597a16bf9c19a62391d1";
 
     private static final List<String> BUILT_IN_PROFILES = List.of("hypertrophy", "strength", "general-fitness");
@@ -34,7 +34,8 @@ class RuleSetVersionTests {
     void theRuleSetVersionChangesWheneverWhatTheRulesDecideChanges() throws Exception {
         String digest = digest();
         String hint = "the built-in rule set changed (profiles, rule metadata or model defaults): bump "
-                + "Mesolint.RULE_SET_VERSION, add its CHANGELOG.md section, and record version and digest here ("
+                + "Mesolint.RULE_SET_VERSION, add its '### Rule set' section to core/ruleset/rule-set-changes.md "
+                + "and to CHANGELOG.md, and record version and digest here ("
                 + digest + ")";
         assertEquals(RECORDED_DIGEST, digest, hint);
         assertEquals(RECORDED_VERSION, Mesolint.RULE_SET_VERSION, hint);

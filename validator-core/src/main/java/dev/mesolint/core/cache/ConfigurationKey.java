@@ -27,11 +27,12 @@ public final class ConfigurationKey {
     }
 
     /**
-     * A key for this build of mesolint: the version, and the size and time of the jar it runs from, so that a rebuilt
-     * snapshot does not reuse what an older build of the same version found.
+     * A key for this build of mesolint: the version, the rule-set version, and the size and time of the jar it runs
+     * from, so that a rebuilt snapshot does not reuse what an older build of the same version found.
      */
     public static ConfigurationKey forThisVersion() {
-        return new ConfigurationKey(Mesolint.version() + " " + codeStamp(Mesolint.class));
+        return new ConfigurationKey(Mesolint.version() + " rules " + Mesolint.RULE_SET_VERSION + " "
+                + codeStamp(Mesolint.class));
     }
 
     /** Size and time of the jar a class was loaded from ("classes" for a folder), so rebuilt jars change keys. */

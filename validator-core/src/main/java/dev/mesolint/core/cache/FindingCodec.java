@@ -107,7 +107,8 @@ final class FindingCodec {
             edit.put("pointer", e.pointer());
             edit.put("key", e.key());
             edit.put("text", e.text());
-            location(edit, e.location());
+            // Its own object: the location's pointer (the key) is not the edit's pointer (the entry it changes).
+            location(edit.putObject("at"), e.location());
         });
     }
 
@@ -124,7 +125,8 @@ final class FindingCodec {
         }
         JsonNode e = node.get("edit");
         if (e != null && !e.isNull()) {
-            facts = facts.withEdit(new Edit(text(e, "pointer"), text(e, "key"), text(e, "text"), location(e)));
+            facts = facts.withEdit(new Edit(text(e, "pointer"), text(e, "key"), text(e, "text"),
+                    location(required(e, "at"))));
         }
         return facts;
     }

@@ -35,7 +35,8 @@ final class SessionPlanner {
         }
         if (!planned.isEmpty()) {
             PlannedSet last = planned.remove(planned.size() - 1);
-            planned.add(new PlannedSet(last.work(), last.set(), last.setupSecondsBefore(), 0, last.round()));
+            planned.add(new PlannedSet(last.item(), last.work(), last.set(), last.setupSecondsBefore(), 0,
+                    last.restWritten(), last.round()));
         }
         return List.copyOf(planned);
     }
@@ -44,7 +45,7 @@ final class SessionPlanner {
         double setup = setupSeconds(work);
         for (SetPrescription set : work.sets()) {
             double rest = set.rest().map(Durations::seconds).orElse(params.defaultRestSeconds());
-            planned.add(new PlannedSet(work, set, setup, rest, 0));
+            planned.add(new PlannedSet(work, work, set, setup, rest, set.rest().isPresent(), 0));
             setup = 0;
         }
     }
@@ -62,9 +63,11 @@ final class SessionPlanner {
                     continue;
                 }
                 SetPrescription set = item.sets().get(round);
-                double rest = i == lastItem ? roundRest
+                boolean roundEnd = i == lastItem;
+                double rest = roundEnd ? roundRest
                         : set.rest().map(Durations::seconds).orElse(params.supersetChangeoverSeconds());
-                planned.add(new PlannedSet(item, set, setup, rest, round + 1));
+                boolean written = roundEnd ? superset.rest().isPresent() : set.rest().isPresent();
+                planned.add(new PlannedSet(superset, item, set, setup, rest, written, round + 1));
                 setup = 0;
             }
         }

@@ -46,8 +46,9 @@ public final class ShortRestCompoundRule implements Rule {
                     + "hypertrophy profile asks 2 min after every compound set, where more rest gave more growth "
                     + "(Schoenfeld et al. 2016; Singer et al. 2024). Rest is judged where the programme writes it: "
                     + "after each set of straight sets, including the last set when another exercise follows; in a "
-                    + "superset, the superset's rest after each round plus the changeovers between its items. A set "
-                    + "without a written rest is not judged.",
+                    + "superset, the superset's rest after each round plus the changeovers between its items (15 s for "
+                    + "one not written), as the session plan of docs/model.md runs it. A set or superset without a "
+                    + "written rest is not judged.",
             "ACSM position stand 2009 (Ratamess et al., Med Sci Sports Exerc 41(3):687-708): 2-3 min or more for "
                     + "heavy core lifts and power work, 1-2 min for assistance exercises; Haff & Triplett 2016, NSCA "
                     + "Essentials 4th ed., Ch. 17 (rest by goal: strength and power 2-5 min); Schoenfeld et al. 2016 "
@@ -64,23 +65,23 @@ public final class ShortRestCompoundRule implements Rule {
     public void check(RuleContext context) {
         boolean separateSquatHinge = context.param(MIN_REST_SQUAT_HINGE) != context.param(MIN_REST);
         boolean separateAssistance = context.param(MIN_REST_ASSISTANCE) != context.param(MIN_REST);
-        RestGaps.check(context, (work, e) -> e.isCompound() || e.ballistic()
+        RestCheck.check(context, (work, e) -> e.isCompound() || e.ballistic()
                 ? limit(work, e, separateSquatHinge, separateAssistance) : null);
     }
 
-    private static RestGaps.Limit limit(ExerciseWork work, Exercise e, boolean separateSquatHinge,
+    private static RestCheck.Limit limit(ExerciseWork work, Exercise e, boolean separateSquatHinge,
             boolean separateAssistance) {
         if (work.role(e) == Role.ASSISTANCE) {
-            return new RestGaps.Limit(MIN_REST_ASSISTANCE, separateAssistance ? "assistance compound sets"
+            return new RestCheck.Limit(MIN_REST_ASSISTANCE, separateAssistance ? "assistance compound sets"
                     : "compound sets");
         }
         // Power work (cleans, snatches, jumps) rests as a main lift, not as a heavy squat or pull: 2-5 min (NSCA).
         boolean squatOrHinge = !e.ballistic()
                 && (e.pattern() == MovementPattern.SQUAT || e.pattern() == MovementPattern.HINGE);
         if (!squatOrHinge) {
-            return new RestGaps.Limit(MIN_REST, separateAssistance ? "main-lift sets" : "compound sets");
+            return new RestCheck.Limit(MIN_REST, separateAssistance ? "main-lift sets" : "compound sets");
         }
-        return new RestGaps.Limit(MIN_REST_SQUAT_HINGE, separateSquatHinge ? "main squat and hinge sets"
+        return new RestCheck.Limit(MIN_REST_SQUAT_HINGE, separateSquatHinge ? "main squat and hinge sets"
                 : separateAssistance ? "main-lift sets" : "compound sets");
     }
 }

@@ -20,8 +20,8 @@ public final class ShortRestIsolationRule implements Rule {
             "Isolation sets tire one muscle and little else, so they recover faster than compound sets; still, under "
                     + "a minute of rest costs reps on the next set, and the pooled studies show a small benefit for "
                     + "rests above 60 s. The rest is judged as for compound sets: after each straight set that more "
-                    + "work follows, and for a superset the rest after each round plus the changeovers. A set "
-                    + "without a written rest is not judged.",
+                    + "work follows, and for a superset the rest after each round plus the changeovers (15 s for one "
+                    + "not written). A set or superset without a written rest is not judged.",
             "Singer et al. 2024 (Front Sports Act Living 6:1429789): a small benefit for rests longer than 60 s, "
                     + "none clear beyond 90 s");
 
@@ -32,6 +32,6 @@ public final class ShortRestIsolationRule implements Rule {
 
     @Override
     public void check(RuleContext context) {
-        RestGaps.check(context, (work, e) -> e.isCompound() ? null : new RestGaps.Limit(MIN_REST, "isolation sets"));
+        RestCheck.check(context, (work, e) -> e.isCompound() ? null : new RestCheck.Limit(MIN_REST, "isolation sets"));
     }
 }

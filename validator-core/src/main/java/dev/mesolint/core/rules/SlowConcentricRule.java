@@ -48,8 +48,8 @@ public final class SlowConcentricRule implements Rule {
                 Tempo brisk = new Tempo(t.lowering(), t.bottomPause(), 1, t.topPause(), false);
                 found.add(week, session, work.exerciseId(), context.fieldLocation(set, "tempo"), set.waivers(),
                         new Occurrences.Step(superset == null ? "set" : "round", Integer.toString(set.number())),
-                        "tempo " + t + " lifts in " + RestGaps.seconds(t.lifting()) + ", at or over the "
-                                + RestGaps.seconds(limit) + " the " + context.profileName() + " profile reports: a "
+                        "tempo " + t + " lifts in " + Texts.seconds(t.lifting()) + ", at or over the "
+                                + Texts.seconds(limit) + " the " + context.profileName() + " profile reports: a "
                                 + "slow lift lowers the load and the effort per rep, it does not add stimulus",
                         "tempo: " + brisk + " (lift with control, as fast as the load allows)");
             }

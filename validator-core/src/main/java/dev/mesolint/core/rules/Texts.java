@@ -17,6 +17,11 @@ final class Texts {
     }
 
     /** A share as a percentage with at most one decimal: {@code 80%}, {@code 87.5%}. */
+    /** {@code 90 s}, {@code 2.5 s}: a duration in seconds as messages show it. */
+    static String seconds(double s) {
+        return (s == Math.rint(s) ? Long.toString((long) s) : String.format(java.util.Locale.ROOT, "%.1f", s)) + " s";
+    }
+
     static String percent(double fraction) {
         return num(fraction * 100) + "%";
     }
