@@ -117,6 +117,11 @@ final class CheckCommand implements Callable<Integer> {
             + "of the HTML report, e.g. for a report that will be shared.")
     boolean noReasons;
 
+    @Option(names = "--include-reasons", description = "Keep the reasons of the athlete's constraints (health data) in "
+            + "the SARIF and JSON reports. By default they are left out, as those reports are uploaded to "
+            + "code-scanning services and kept with CI logs.")
+    boolean includeReasons;
+
     @Option(names = "--help-uri-base", paramLabel = "URL",
             description = "Where your team publishes the rule reference pages (docs/rules): reports link each rule "
                     + "to URL/RULE-ID.md. Default: no links; SARIF carries each rule's page inline.")
@@ -204,7 +209,7 @@ final class CheckCommand implements Callable<Integer> {
         Workspace workspace = result.workspace();
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
                 .withBaselineInForce(result.baselineInForce())
-                .withJunitFailAt(junitLevel).withGitAt(workspace.root());
+                .withJunitFailAt(junitLevel).withGitAt(workspace.root()).withIncludeReasons(includeReasons);
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
                 .withReasons(!noReasons);
         if (reports.stream().anyMatch(t -> t.format() == ReportFormat.HTML || t.format() == ReportFormat.HTML_SHEET)

@@ -152,6 +152,15 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     boolean noReasons;
 
     /**
+     * Keep the reasons of the athlete's constraints (health data) in the SARIF and JSON reports. By default they are
+     * left out, as those reports are uploaded to code-scanning services and kept with CI logs.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.includeReasons", defaultValue = "false")
+    boolean includeReasons;
+
+    /**
      * Let a run that finds no programme file pass. By default it fails the build, so a misnamed folder, a glob that
      * matches nothing or a link that leads nowhere cannot pass in silence.
      *
@@ -219,7 +228,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         }
         if (!targets.isEmpty()) {
             execution.writeReports(result, Duration.ofNanos(System.nanoTime() - started), targets,
-                    reportFolder().toPath(), !noReasons);
+                    reportFolder().toPath(), !noReasons, includeReasons);
         }
         if (result.report().nothingChecked()) {
             emptyRun();

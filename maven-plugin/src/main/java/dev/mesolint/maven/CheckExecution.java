@@ -69,10 +69,10 @@ final class CheckExecution {
 
     /** Writes every report of the run; a report that cannot be written is a build error. */
     void writeReports(RunResult result, Duration elapsed, List<ReportTarget> targets, Path folder,
-            boolean showReasons) throws MojoExecutionException {
+            boolean showReasons, boolean includeReasons) throws MojoExecutionException {
         try {
             ReportOptions options = ReportOptions.DEFAULTS.withGitAt(result.request().root())
-                    .withBaselineInForce(result.baselineInForce());
+                    .withBaselineInForce(result.baselineInForce()).withIncludeReasons(includeReasons);
             RunReports.writeAll(RunReports.input(result.report(), prepared.rules(), result.request(), elapsed)
                     .withOptions(options).withHtml(coachReport(result, targets, showReasons)), targets);
         } catch (IOException e) {

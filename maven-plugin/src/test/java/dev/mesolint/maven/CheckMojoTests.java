@@ -1,6 +1,7 @@
 package dev.mesolint.maven;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -162,6 +163,34 @@ class CheckMojoTests {
         assertThrows(MojoFailureException.class, again::execute);
         assertTrue(repo.log.lines.contains("[INFO] mesolint: 2 programmes unchanged, results reused from cache"),
                 "findings-only reports keep the cache: " + repo.log.text());
+    }
+
+    @Test
+    void constraintReasonsStayOutOfSarifAndJsonUnlessIncludeReasons() throws Exception {
+        String reason = "Harbourside clinic note P-5120";
+        MojoFixture repo = new MojoFixture(dir).programme("avoid.yaml", MojoFixture.PROGRAMME.replace(
+                "session-minutes: 60\n", "session-minutes: 60\nathlete:\n  constraints:\n"
+                        + "    - avoid: [barbell-bench-press]\n      reason: " + reason + "\n"));
+        Path sarif = dir.resolve("target/mesolint/mesolint.sarif");
+        // First checked afresh, then from the cache (which keeps no programme): the reason is left out both times.
+        for (int run = 0; run < 2; run++) {
+            CheckMojo mojo = repo.check();
+            mojo.reports = List.of("sarif");
+            assertThrows(MojoFailureException.class, mojo::execute);
+            String text = Files.readString(sarif);
+            assertTrue(text.contains("constraint-avoid") && text.contains("(reason left out)"), text);
+            assertFalse(text.contains(reason), text);
+        }
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: 1 programme unchanged, results reused from cache"),
+                repo.log.text());
+        assertTrue(repo.log.text().contains(reason), "the build log, read by the coach, keeps the reason");
+
+        CheckMojo kept = repo.check();
+        kept.reports = List.of("sarif", "json");
+        kept.includeReasons = true;
+        assertThrows(MojoFailureException.class, kept::execute);
+        assertTrue(Files.readString(sarif).contains(reason));
+        assertTrue(Files.readString(dir.resolve("target/mesolint/mesolint.json")).contains(reason));
     }
 
     @Test
