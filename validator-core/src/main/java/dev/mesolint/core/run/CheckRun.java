@@ -91,7 +91,7 @@ public final class CheckRun {
     /** The programme files {@code inputs} hold. */
     private static List<Path> programmes(Workspace workspace, List<Path> inputs) {
         CheckRequest all = workspace.request(inputs);
-        return ProgrammeFiles.find(all.root(), all.inputs(), Set.copyOf(all.extraCatalogues())).programmes();
+        return ProgrammeFiles.find(all.root(), all.inputs(), all.ownFiles()).programmes();
     }
 
     /** The {@code candidates} changed since the revision; every one when a configuring file changed. */
