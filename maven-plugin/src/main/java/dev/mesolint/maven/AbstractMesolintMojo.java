@@ -186,6 +186,21 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             getLog().info("mesolint: Note: " + Mesolint.CAUTION);
         }
         List<ReportTarget> targets = reportTargets();
+        // An unchanged build replays the last outcome without loading the checker: no parser, schema or rule.
+        Optional<UnchangedBuild> unchanged = useCache() && targets.isEmpty() && (newSince == null || newSince.isBlank())
+                ? UnchangedBuild.stamp(this, outputDirectory.toPath()) : Optional.empty();
+        if (unchanged.isPresent() && unchanged.get().replayed(getLog())) {
+            return;
+        }
+        if (unchanged.isEmpty()) {
+            run(targets);
+            return;
+        }
+        unchanged.get().record(this, () -> run(targets));
+    }
+
+    /** A real run: settings, the (per-file cached) check, the baseline, reports, then the goal's verdict. */
+    private void run(List<ReportTarget> targets) throws MojoExecutionException, MojoFailureException {
         boolean figures = targets.stream().anyMatch(t -> RunReports.needsFigures(t.format()));
         if (useCache() && figures) {
             getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
@@ -221,6 +236,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         if (result.report().nothingChecked()) {
             emptyRun();
         }
+        lastRunProgrammes = result.cache().reused() + result.cache().checked();
         afterCheck(result, reportOnly);
     }
 
@@ -244,6 +260,9 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         return path.startsWith(base) && !path.equals(base) ? base.relativize(path).toString().replace('\\', '/')
                 : path.toString();
     }
+
+    /** How many programme files the last real run covered (for the unchanged-build record). */
+    int lastRunProgrammes;
 
     /** The report formats this goal writes, as configured. */
     abstract List<String> reportFormats();
