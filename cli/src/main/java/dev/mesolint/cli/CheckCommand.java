@@ -280,8 +280,8 @@ final class CheckCommand implements Callable<Integer> {
             cli.getErr().println("mesolint: " + SafeText.line(selection.everyBecause().get()) + " changed" + since
                     + ": every programme is checked");
         } else if (selection.programmes().isEmpty()) {
-            cli.getErr().println("mesolint: no programme changed" + since + " (" + selection.changedFiles()
-                    + " changed file" + (selection.changedFiles() == 1 ? "" : "s") + " compared): nothing to check");
+            cli.getErr().println("mesolint: no programme changed" + since + "; " + selection.changedFiles()
+                    + " changed file" + (selection.changedFiles() == 1 ? "" : "s") + " compared: nothing to check");
             return false;
         } else if (!output.quiet) {
             cli.getErr().println("mesolint: " + selection.programmes().size() + " of " + result.selectedFrom()
