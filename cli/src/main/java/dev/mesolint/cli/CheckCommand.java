@@ -243,6 +243,11 @@ final class CheckCommand implements Callable<Integer> {
             result.upgradeNotice().ifPresent(lines -> cli.getErr().println("mesolint: "
                     + String.join(System.lineSeparator(), lines.stream().map(SafeText::line).toList())));
         }
+        if (!output.quiet) {
+            // mesolint's own files among the programmes: checked as what they are, and not in effect from there.
+            report.files().forEach(f -> f.checkedAs().ifPresent(kind -> cli.getErr().println("mesolint: "
+                    + SafeText.line(kind.notice(f.displayPath())))));
+        }
         if (!hidden.isEmpty()) {
             cli.getErr().println("mesolint: " + hidden.size() + " hidden .yaml file" + (hidden.size() == 1 ? "" : "s")
                     + " not checked (folders skip names that start with '.'; name a file to check it): "

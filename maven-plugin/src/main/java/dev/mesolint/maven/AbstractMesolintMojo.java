@@ -230,6 +230,9 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             execution.writeReports(result, Duration.ofNanos(System.nanoTime() - started), targets,
                     reportFolder().toPath(), !noReasons, includeReasons);
         }
+        // mesolint's own files among the programmes: checked as what they are, and not in effect from there.
+        result.report().files().forEach(f -> f.checkedAs().ifPresent(kind -> getLog().info("mesolint: "
+                + kind.notice(f.displayPath()))));
         if (result.report().nothingChecked()) {
             emptyRun();
         }

@@ -55,7 +55,7 @@ public final class CachedCheck {
     /** As {@link #run(Optional)}, telling {@code progress} after each programme file, reused or checked. */
     public Outcome run(Optional<ResultCache> cache, RunProgress progress) throws IOException {
         ProgrammeFiles.Discovery found = ProgrammeFiles.find(request.root(), request.inputs(),
-                Set.copyOf(request.extraCatalogues()));
+                request.ownFiles());
         List<Path> files = found.programmes();
         Supplier<Checker> checker = lazily(() -> new Checker(request, rules));
         List<FileReport> reports = new ArrayList<>(cache.flatMap(ResultCache::catalogueReports)

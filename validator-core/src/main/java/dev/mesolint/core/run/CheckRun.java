@@ -88,14 +88,13 @@ public final class CheckRun {
         return new RunResult(workspace, checks, rules, report, unreadable, cache, selection, candidates, review);
     }
 
-    /** The programme files {@code inputs} hold. */
     /**
      * The entries a full check would cover: the programmes and the entries it would report as unreadable (a dangling
      * link, a FIFO), so that a changed one of those is reported by a quick check too, never skipped.
      */
     private static List<Path> programmes(Workspace workspace, List<Path> inputs) {
         CheckRequest all = workspace.request(inputs);
-        ProgrammeFiles.Discovery found = ProgrammeFiles.find(all.root(), all.inputs(), Set.copyOf(all.extraCatalogues()));
+        ProgrammeFiles.Discovery found = ProgrammeFiles.find(all.root(), all.inputs(), all.ownFiles());
         List<Path> entries = new java.util.ArrayList<>(found.programmes());
         found.refused().forEach(r -> entries.add(r.path()));
         return entries;
