@@ -103,3 +103,8 @@ classes_cds=$(MESOLINT_JAVA_OPTS="-Xlog:class+load=info" "$here/mesolint" check 
 shared=$(MESOLINT_JAVA_OPTS="-Xlog:class+load=info" "$here/mesolint" check "$one" | grep -c 'shared objects file' || true)
 printf "with the archive %ss, without %ss, bare JVM %ss; %s classes loaded (%s from the archive)\n" \
   "$(col "$tmp/cds" 1)" "$(col "$tmp/nocds" 1)" "$(col "$tmp/bare" 1)" "$classes_cds" "$shared"
+
+echo
+# The plugin's unchanged build against an empty Mojo and bare Maven (installs the plugin from this checkout).
+(cd "$here" && mvn -B -q -Dstyle.color=never -DskipTests -pl maven-plugin -am install >&2)
+bash "$here/benchmarks/plugin.sh" --runs "$runs"

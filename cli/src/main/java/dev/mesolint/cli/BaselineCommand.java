@@ -3,11 +3,13 @@ package dev.mesolint.cli;
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
-import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.run.CheckRun;
+import dev.mesolint.core.run.RunRequest;
+import dev.mesolint.core.run.RunResult;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -61,9 +63,11 @@ final class BaselineCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         try {
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, Optional.empty(), Optional.empty()),
-                    installed.rules());
-            RunReport report = new Checker(workspace.request(paths), installed.rules()).run();
+            // Recorded as found: a baseline is never compared with itself.
+            RunResult result = CheckRun.run(RunRequest.of(options.toRunOptions(paths, catalogues.files,
+                    Optional.empty(), Optional.empty()), paths).withoutBaseline().withFigures(false), installed.rules());
+            Workspace workspace = result.workspace();
+            RunReport report = result.report();
             if (!report.missing().isEmpty()) {
                 report.missing().forEach(m -> spec.commandLine().getErr().println(
                         "mesolint: no such file or folder: " + m));

@@ -1,45 +1,33 @@
 package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
-import dev.mesolint.core.baseline.Baseline;
 import dev.mesolint.core.config.ConfigProblem;
+import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunOptions;
 import dev.mesolint.core.engine.RunProgress;
-import dev.mesolint.core.review.ChangeReview;
-import dev.mesolint.core.review.NewSinceGate;
-import dev.mesolint.core.review.Review;
-import dev.mesolint.core.review.ReviewHtmlSection;
-import dev.mesolint.core.review.ReviewInput;
-import dev.mesolint.core.review.ReviewRequest;
-import dev.mesolint.core.engine.CheckRequest;
-import dev.mesolint.core.cache.CachedCheck;
-import dev.mesolint.core.review.ChangedProgrammes;
-import dev.mesolint.core.cache.ConfigurationKey;
-import dev.mesolint.core.cache.ResultCache;
-import dev.mesolint.core.engine.Checker;
-import dev.mesolint.core.engine.ProgrammeFiles;
-import dev.mesolint.core.engine.DuplicateProgrammeIds;
-import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
-import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.HtmlOptions;
 import dev.mesolint.core.report.ReportFormat;
-import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.review.ChangedProgrammes;
+import dev.mesolint.core.review.ReviewHtmlSection;
+import dev.mesolint.core.review.ReviewInput;
 import dev.mesolint.core.rules.InternalErrorRule;
+import dev.mesolint.core.run.CheckRun;
+import dev.mesolint.core.run.RunRequest;
+import dev.mesolint.core.run.RunResult;
 import dev.mesolint.core.text.SafeText;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
-import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -129,6 +117,11 @@ final class CheckCommand implements Callable<Integer> {
             + "of the HTML report, e.g. for a report that will be shared.")
     boolean noReasons;
 
+    @Option(names = "--include-reasons", description = "Keep the reasons of the athlete's constraints (health data) in "
+            + "the SARIF and JSON reports. By default they are left out, as those reports are uploaded to "
+            + "code-scanning services and kept with CI logs.")
+    boolean includeReasons;
+
     @Option(names = "--help-uri-base", paramLabel = "URL",
             description = "Where your team publishes the rule reference pages (docs/rules): reports link each rule "
                     + "to URL/RULE-ID.md. Default: no links; SARIF carries each rule's page inline.")
@@ -156,86 +149,79 @@ final class CheckCommand implements Callable<Integer> {
         Optional<Severity> junitLevel = level(junitFailAt, "--junit-fail-at");
         ReportFormat stdoutFormat = output.stdoutFormat(reports, cli);
         Optional<StandardInput.Document> piped = stdin.read(paths, parent.in(), cli);
+        if (changed != null && piped.isPresent()) {
+            throw new CommandLine.ParameterException(cli, "--changed selects files of the work tree; it cannot be "
+                    + "used with standard input (-)");
+        }
         List<Path> located = piped.map(d -> List.of(d.path())).orElse(paths);
-        RunReport report;
-        Workspace workspace;
-        CheckRequest request;
-        InstalledRules installed;
-        Checker checker;
-        Review review = null;
         long started = System.nanoTime();
-        boolean empty;
-        List<String> hidden;
+        RunResult result;
+        InstalledRules installed;
         try {
             installed = Installed.rules();
             RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
                     Optional.ofNullable(baseline));
-            workspace = Workspace.open(runOptions, installed.rules());
-            List<Path> inputs = piped.isPresent() ? List.of() : paths;
-            if (changed != null) {
-                Optional<List<Path>> selected = changedOnly(workspace, inputs, piped.isPresent(), cli);
-                if (selected.isEmpty()) {
-                    return 0;
-                }
-                inputs = selected.get();
+            RunRequest request = RunRequest.of(runOptions, piped.isPresent() ? List.of() : paths)
+                    .withFigures(CacheOptions.needFigures(reports, stdoutFormat));
+            if (piped.isPresent()) {
+                request = request.withPiped(new RunRequest.Piped(piped.get().path(), piped.get().content()));
             }
-            request = workspace.request(inputs).keepingFigures(CacheOptions.needFigures(reports, stdoutFormat));
+            if (changed != null) {
+                request = request.withChangedSince(new RunRequest.ChangedSince(Optional.of(changed)
+                        .filter(c -> !c.isBlank())));
+            }
             Optional<String> uncached = cache.notUsed(reports, stdoutFormat);
             if (piped.isEmpty() && uncached.isEmpty()) {
                 // Unchanged files cost one read and one hash; the checker is only built when some file changed.
-                checker = null;
-                report = cachedRun(workspace, request, installed, cli.getErr());
-            } else {
-                if (cache.enabled && !output.quiet) {
-                    cli.getErr().println("mesolint: cache not used: " + uncached.orElse("standard input is checked "
-                            + "afresh"));
-                }
-                Checker built = new Checker(request, installed.rules());
-                checker = built;
-                RunProgress progress = output.progress(cli.getErr());
-                try {
-                    report = DuplicateProgrammeIds.mark(piped.map(d -> built.run(d.path(), d.content()))
-                            .orElseGet(() -> built.run(progress)));
-                } finally {
-                    ProgressLine.finish(progress);
-                }
+                request = request.withCache(cache.file(runOptions.root()));
+            } else if (cache.enabled && !output.quiet) {
+                cli.getErr().println("mesolint: cache not used: " + uncached.orElse("standard input is checked "
+                        + "afresh"));
             }
-            empty = piped.isEmpty() && report.nothingChecked();
-            hidden = report.hidden();
-            report.files().stream().filter(f -> request.extraCatalogues().stream()
-                    .anyMatch(c -> ProgrammeFiles.display(request.root(), c).equals(f.displayPath())))
-                    .forEach(bad -> cli.getErr().println("mesolint: catalogue "
-                    + SafeText.line(bad.displayPath()) + " did not load (see its findings): its exercises are unknown "
-                    + "in this run"));
-            if (!noBaseline) {
-                report = Baseline.applyConfigured(workspace, report);
+            if (noBaseline) {
+                request = request.withoutBaseline();
             }
             if (newSince != null) {
-                review = ChangeReview.run(new ReviewRequest(runOptions, piped.isPresent() ? List.of() : paths,
-                        Optional.of(newSince), Optional.empty()), installed.rules());
-                report = new NewSinceGate(installed.rules()).apply(report, review);
+                request = request.withNewSince(newSince);
+            }
+            RunProgress progress = output.progress(cli.getErr());
+            try {
+                result = CheckRun.run(request.withProgress(progress), installed.rules());
+            } finally {
+                ProgressLine.finish(progress);
             }
         } catch (ConfigProblem e) {
             return Installed.fail(e, cli.getErr());
         }
+        if (result.selection().isPresent() && !said(result, cli)) {
+            return 0;
+        }
+        RunReport report = result.report();
+        sayCache(result.cache(), cli.getErr());
+        boolean empty = piped.isEmpty() && report.nothingChecked();
+        List<String> hidden = report.hidden();
+        result.failedCatalogues().forEach(bad -> cli.getErr().println("mesolint: catalogue " + SafeText.line(bad)
+                + " did not load (see its findings): its exercises are unknown in this run"));
         // Missing paths first, so that no summary of what was checked comes before the error.
         report.missing().forEach(m -> cli.getErr().println("mesolint: no such file or folder: " + SafeText.line(m)
                 + " (check the path; it is read from the current folder)"));
         Duration elapsed = Duration.ofNanos(System.nanoTime() - started);
+        Workspace workspace = result.workspace();
         ReportOptions wording = ReportOptions.DEFAULTS.withHelpUriBase(Optional.ofNullable(helpUriBase))
-                .withBaselineInForce(!noBaseline && workspace.baselineFile().isPresent() || review != null)
-                .withJunitFailAt(junitLevel).withGitAt(workspace.root());
+                .withBaselineInForce(result.baselineInForce())
+                .withJunitFailAt(junitLevel).withGitAt(workspace.root()).withIncludeReasons(includeReasons);
         HtmlOptions coach = HtmlOptions.DEFAULTS.withPlateIncrement(workspace.config().plateIncrement())
                 .withReasons(!noReasons);
-        if (checker != null) {
-            coach = coach.withCatalogue(checker.catalogue());
+        if (reports.stream().anyMatch(t -> t.format() == ReportFormat.HTML || t.format() == ReportFormat.HTML_SHEET)
+                || stdoutFormat == ReportFormat.HTML || stdoutFormat == ReportFormat.HTML_SHEET) {
+            coach = coach.withCatalogue(result.catalogue());
         }
-        if (review != null) {
-            coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(review, installed.rules(),
+        if (result.review().isPresent()) {
+            coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(result.review().get(), installed.rules(),
                     workspace.root(), !noReasons)));
         }
-        ReportInput input = RunReports.input(report, installed.rules(), request, elapsed).withOptions(wording)
-                .withHtml(coach);
+        ReportInput input = RunReports.input(report, installed.rules(), result.request(), elapsed)
+                .withOptions(wording).withHtml(coach);
         if (stdoutFormat == ReportFormat.CONSOLE) {
             if (!report.files().isEmpty() || report.missing().isEmpty()) {
                 output.console(showWaived).write(report, cli.getOut());
@@ -254,8 +240,13 @@ final class CheckCommand implements Callable<Integer> {
         }
         if (!output.quiet) {
             // After the report, where it is read; a notice only, it never changes the exit code.
-            workspace.upgradeNotice().ifPresent(lines -> cli.getErr().println("mesolint: "
+            result.upgradeNotice().ifPresent(lines -> cli.getErr().println("mesolint: "
                     + String.join(System.lineSeparator(), lines.stream().map(SafeText::line).toList())));
+        }
+        if (!output.quiet) {
+            // mesolint's own files among the programmes: checked as what they are, and not in effect from there.
+            report.files().forEach(f -> f.checkedAs().ifPresent(kind -> cli.getErr().println("mesolint: "
+                    + SafeText.line(kind.notice(f.displayPath())))));
         }
         if (!hidden.isEmpty()) {
             cli.getErr().println("mesolint: " + hidden.size() + " hidden .yaml file" + (hidden.size() == 1 ? "" : "s")
@@ -279,58 +270,38 @@ final class CheckCommand implements Callable<Integer> {
     }
 
     /**
-     * The programmes of {@code inputs} changed since {@code --changed}'s revision, said on standard error; empty
-     * when none changed, after saying what was compared (that is a clean run, not a silent pass).
+     * Says on standard error what {@code --changed} compared; false when no programme changed (a clean run, not a
+     * silent pass).
      */
-    private Optional<List<Path>> changedOnly(Workspace workspace, List<Path> inputs, boolean piped, CommandLine cli)
-            throws ConfigProblem {
-        if (piped) {
-            throw new CommandLine.ParameterException(cli, "--changed selects files of the work tree; it cannot be "
-                    + "used with standard input (-)");
-        }
-        CheckRequest all = workspace.request(inputs);
-        List<Path> candidates = ProgrammeFiles.find(all.root(), all.inputs(), Set.copyOf(all.extraCatalogues()))
-                .programmes();
-        Set<Path> configuring = new HashSet<>(all.extraCatalogues());
-        workspace.config().file().ifPresent(configuring::add);
-        ChangedProgrammes.Selection selection = ChangedProgrammes.since(workspace.root(),
-                Optional.of(changed).filter(c -> !c.isBlank()), candidates, configuring);
+    private boolean said(RunResult result, CommandLine cli) {
+        ChangedProgrammes.Selection selection = result.selection().orElseThrow();
         String since = " since " + SafeText.line(selection.comparedWith());
         if (selection.everyBecause().isPresent()) {
             cli.getErr().println("mesolint: " + SafeText.line(selection.everyBecause().get()) + " changed" + since
                     + ": every programme is checked");
         } else if (selection.programmes().isEmpty()) {
-            cli.getErr().println("mesolint: no programme changed" + since + " (" + selection.changedFiles()
-                    + " changed file" + (selection.changedFiles() == 1 ? "" : "s") + " compared): nothing to check");
-            return Optional.empty();
+            cli.getErr().println("mesolint: no programme changed" + since + "; " + selection.changedFiles()
+                    + " changed file" + (selection.changedFiles() == 1 ? "" : "s") + " compared: nothing to check");
+            return false;
         } else if (!output.quiet) {
-            cli.getErr().println("mesolint: " + selection.programmes().size() + " of " + candidates.size()
+            cli.getErr().println("mesolint: " + selection.programmes().size() + " of " + result.selectedFrom()
                     + " programmes changed" + since);
         }
-        return Optional.of(selection.programmes());
+        return true;
     }
 
-    /** The run through the results cache; says on standard error how much it reused (unless quiet). */
-    private RunReport cachedRun(Workspace workspace, CheckRequest request, InstalledRules installed,
-            java.io.PrintWriter err) throws IOException {
-        Path file = cache.file(workspace.root());
-        ResultCache store = ResultCache.open(file, ConfigurationKey.of(workspace, request, installed.rules()));
-        CachedCheck.Outcome outcome = new CachedCheck(request, installed.rules()).run(Optional.of(store));
-        try {
-            store.save();
-        } catch (IOException e) {
-            err.println("mesolint: the cache could not be saved (" + SafeText.line(String.valueOf(e.getMessage()))
-                    + "); the results of this run are complete");
+    /** How much the cache reused (unless quiet), and why it could not be saved. */
+    private void sayCache(RunResult.CacheUse use, java.io.PrintWriter err) {
+        use.notSaved().ifPresent(why -> err.println("mesolint: the cache could not be saved (" + SafeText.line(why)
+                + "); the results of this run are complete"));
+        if (!output.quiet && use.rejected() > 0) {
+            err.println("mesolint: cache: " + use.rejected() + " damaged entr" + (use.rejected() == 1 ? "y" : "ies")
+                    + " (checksum failed) ignored");
         }
-        if (!output.quiet && store.rejectedEntries() > 0) {
-            err.println("mesolint: cache: " + store.rejectedEntries() + " damaged entr"
-                    + (store.rejectedEntries() == 1 ? "y" : "ies") + " (checksum failed) ignored");
+        if (!output.quiet && use.used()) {
+            err.println("mesolint: cache: " + use.reused() + " unchanged programme" + (use.reused() == 1 ? "" : "s")
+                    + " reused, " + use.checked() + " checked");
         }
-        if (!output.quiet) {
-            err.println("mesolint: cache: " + outcome.reused() + " unchanged programme" + (outcome.reused() == 1 ? ""
-                    : "s") + " reused, " + outcome.checked() + " checked");
-        }
-        return outcome.report();
     }
 
     private Optional<Severity> level(String text, String option) {

@@ -2,11 +2,11 @@ package dev.mesolint.cli;
 
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.config.ConfigProblem;
-import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.RunReport;
-import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.run.CheckRun;
+import dev.mesolint.core.run.RunRequest;
 import dev.mesolint.core.report.ConsoleReport;
 import dev.mesolint.core.report.FileMetrics;
 import dev.mesolint.core.report.MetricsCsvWriter;
@@ -72,9 +72,8 @@ final class MetricsCommand implements Callable<Integer> {
         try {
             // The same repository configuration and profiles as 'check', so the figures use the same parameters.
             InstalledRules installed = Installed.rules();
-            Workspace workspace = Workspace.open(options.toRunOptions(paths, catalogues.files, Optional.empty(),
-                    Optional.empty()), installed.rules());
-            run = new Checker(workspace.request(paths), installed.rules()).run();
+            run = CheckRun.run(RunRequest.of(options.toRunOptions(paths, catalogues.files, Optional.empty(),
+                    Optional.empty()), paths).withoutBaseline(), installed.rules()).report();
         } catch (ConfigProblem e) {
             return Installed.fail(e, err);
         }

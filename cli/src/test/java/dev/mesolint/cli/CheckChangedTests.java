@@ -67,7 +67,8 @@ class CheckChangedTests {
         Run run = check("--changed");
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.err().contains("no programme changed since merge base with main ("), run.err());
-        assertTrue(run.err().contains("0 changed files compared"), run.err());
+        assertTrue(run.err().contains("); 0 changed files compared: nothing to check"), run.err());
+        assertFalse(run.err().contains(") ("), "one pair of parentheses: " + run.err());
         assertEquals(1, check().exit(), "the full check still fails on the unchanged warning");
     }
 
@@ -84,6 +85,17 @@ class CheckChangedTests {
         assertEquals(1, untracked.exit(), untracked.out());
         assertTrue(untracked.out().contains("programmes/new-block.yaml"), untracked.out());
         assertFalse(untracked.out().contains("short-rest.yaml"), "the unchanged programme is not checked");
+    }
+
+    @Test
+    void aChangedEntryThatCannotBeReadIsReportedNotSkipped() throws IOException {
+        // A link to a file that does not exist, new in the work tree: it matches *.yaml but is no programme.
+        Files.createSymbolicLink(root.resolve("programmes/alias.yaml"), Path.of("gone.yaml"));
+        Run run = check("--changed");
+        assertEquals(1, run.exit(), run.out() + run.err());
+        assertTrue(run.out().contains("programmes/alias.yaml"), run.out());
+        assertTrue(run.err().contains("1 of 3 programmes changed"), run.err());
+        assertFalse(run.out().contains("short-rest.yaml"), "the unchanged programme is not checked");
     }
 
     @Test

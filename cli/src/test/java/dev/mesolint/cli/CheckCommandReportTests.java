@@ -56,4 +56,31 @@ class CheckCommandReportTests {
         assertEquals(2, o.exit());
         assertTrue(o.err().contains("FORMAT=PATH"), o.err());
     }
+
+    @Test
+    void sarifAndJsonLeaveConstraintReasonsOutUnlessIncludeReasons(@TempDir Path dir) throws Exception {
+        // The sample's own reason is quoted by no rule page, but a reason of our own makes the test self-contained.
+        String reason = "Harbourside clinic note C-2207";
+        Path programme = dir.resolve("programmes/avoid.yaml");
+        Files.createDirectories(programme.getParent());
+        Files.writeString(programme, Files.readString(ROOT.resolve("sample-programs/broken/constraint-avoid.yaml"))
+                .replace("Shoulder discomfort in that position at intake", reason));
+        for (boolean include : new boolean[] {false, true}) {
+            Path sarif = dir.resolve(include + "/mesolint.sarif");
+            Path json = dir.resolve(include + "/mesolint.json");
+            Outcome o = include
+                    ? run("check", "--root", dir.toString(), programme.toString(), "--report", "sarif=" + sarif,
+                            "--report", "json=" + json, "--include-reasons")
+                    : run("check", "--root", dir.toString(), programme.toString(), "--report", "sarif=" + sarif,
+                            "--report", "json=" + json);
+            assertEquals(1, o.exit(), o.err());
+            assertTrue(o.out().contains(reason), "the coach's console keeps the reason: " + o.out());
+            for (Path report : new Path[] {sarif, json}) {
+                String text = Files.readString(report);
+                assertTrue(text.contains("constraint-avoid"), text);
+                assertEquals(include, text.contains(reason), report + " with include-reasons " + include);
+                assertEquals(!include, text.contains("(reason left out)"), report.toString());
+            }
+        }
+    }
 }

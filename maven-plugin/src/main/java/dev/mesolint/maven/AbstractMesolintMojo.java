@@ -1,11 +1,13 @@
 package dev.mesolint.maven;
 
 import dev.mesolint.core.Mesolint;
-import dev.mesolint.core.cache.CachedCheck;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.run.RunRequest;
+import dev.mesolint.core.run.RunResult;
 import java.io.File;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -149,6 +151,24 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
     @Parameter(property = "mesolint.noReasons", defaultValue = "false")
     boolean noReasons;
 
+    /**
+     * Keep the reasons of the athlete's constraints (health data) in the SARIF and JSON reports. By default they are
+     * left out, as those reports are uploaded to code-scanning services and kept with CI logs.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.includeReasons", defaultValue = "false")
+    boolean includeReasons;
+
+    /**
+     * Let a run that finds no programme file pass. By default it fails the build, so a misnamed folder, a glob that
+     * matches nothing or a link that leads nowhere cannot pass in silence.
+     *
+     * @since 0.1.0
+     */
+    @Parameter(property = "mesolint.allowEmpty", defaultValue = "false")
+    boolean allowEmpty;
+
     /** Paths in findings are shown relative to this folder. */
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     File basedir;
@@ -166,6 +186,21 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
             getLog().info("mesolint: Note: " + Mesolint.CAUTION);
         }
         List<ReportTarget> targets = reportTargets();
+        // An unchanged build replays the last outcome without loading the checker: no parser, schema or rule.
+        Optional<UnchangedBuild> unchanged = useCache() && targets.isEmpty() && (newSince == null || newSince.isBlank())
+                ? UnchangedBuild.stamp(this, outputDirectory.toPath()) : Optional.empty();
+        if (unchanged.isPresent() && unchanged.get().replayed(getLog())) {
+            return;
+        }
+        if (unchanged.isEmpty()) {
+            run(targets);
+            return;
+        }
+        unchanged.get().record(this, () -> run(targets));
+    }
+
+    /** A real run: settings, the (per-file cached) check, the baseline, reports, then the goal's verdict. */
+    private void run(List<ReportTarget> targets) throws MojoExecutionException, MojoFailureException {
         boolean figures = targets.stream().anyMatch(t -> RunReports.needsFigures(t.format()));
         if (useCache() && figures) {
             getLog().debug("mesolint: not using the cache: the html and json reports need every programme loaded");
@@ -173,27 +208,61 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         boolean reportOnly = "none".equalsIgnoreCase(failOn == null ? "" : failOn.trim());
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
-                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare()
-                .keepingFigures(figures);
-        prepared.sources().forEach(s -> getLog().debug("mesolint: " + s));
-        Optional<List<String>> notice = prepared.workspace().upgradeNotice();
-        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
-            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
+                includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
+        RunRequest request = prepared.request().withFigures(figures);
+        if (useCache() && !figures) {
+            request = request.withCache(outputDirectory.toPath().resolve("cache.json"));
+        }
+        if (ignoreBaseline) {
+            request = request.withoutBaseline();
+        }
+        if (newSince != null && !newSince.isBlank()) {
+            request = request.withNewSince(newSince.trim());
         }
         CheckExecution execution = new CheckExecution(getLog(), prepared);
         long started = System.nanoTime();
-        CachedCheck.Outcome outcome = execution.check(useCache() && !figures
-                ? Optional.of(outputDirectory.toPath().resolve("cache.json")) : Optional.empty(), ignoreBaseline);
-        if (newSince != null && !newSince.isBlank()) {
-            outcome = execution.newSince(outcome, newSince.trim());
+        RunResult result = execution.run(request);
+        Optional<List<String>> notice = result.upgradeNotice();
+        if (notice.isPresent() && OncePerBuild.first(session == null ? null : session.getRequest(), "rules-version")) {
+            notice.get().forEach(line -> getLog().warn("mesolint: " + line));
         }
         if (!targets.isEmpty()) {
-            execution.writeReports(outcome, Duration.ofNanos(System.nanoTime() - started), targets,
-                    reportFolder().toPath(), !noReasons, !ignoreBaseline
-                    && prepared.workspace().baselineFile().isPresent() || newSince != null);
+            execution.writeReports(result, Duration.ofNanos(System.nanoTime() - started), targets,
+                    reportFolder().toPath(), !noReasons, includeReasons);
         }
-        afterCheck(outcome, reportOnly);
+        // mesolint's own files among the programmes: checked as what they are, and not in effect from there.
+        result.report().files().forEach(f -> f.checkedAs().ifPresent(kind -> getLog().info("mesolint: "
+                + kind.notice(f.displayPath()))));
+        if (result.report().nothingChecked()) {
+            emptyRun();
+        }
+        lastRunProgrammes = result.cache().reused() + result.cache().checked();
+        afterCheck(result, reportOnly);
     }
+
+    /** A run that checked no programme: a build error unless {@code allowEmpty}; said either way. */
+    private void emptyRun() throws MojoExecutionException {
+        String where = "no programme file (*.yaml, *.yml) found in " + shown(programmes)
+                + (includes == null || includes.isEmpty() ? "" : " matching includes " + includes)
+                + (excludes == null || excludes.isEmpty() ? "" : " outside excludes " + excludes);
+        if (!allowEmpty) {
+            throw new MojoExecutionException("mesolint: " + where + ": nothing was checked; check programmes "
+                    + "(mesolint.programmes), includes and excludes, or set allowEmpty (mesolint.allowEmpty) when "
+                    + "that is expected");
+        }
+        getLog().info("mesolint: " + where + ": nothing was checked (allowEmpty)");
+    }
+
+    /** A path as the user wrote it in the POM's terms: relative to the project folder when it is inside it. */
+    private String shown(File file) {
+        Path base = basedir.toPath().toAbsolutePath().normalize();
+        Path path = file.toPath().toAbsolutePath().normalize();
+        return path.startsWith(base) && !path.equals(base) ? base.relativize(path).toString().replace('\\', '/')
+                : path.toString();
+    }
+
+    /** How many programme files the last real run covered (for the unchanged-build record). */
+    int lastRunProgrammes;
 
     /** The report formats this goal writes, as configured. */
     abstract List<String> reportFormats();
@@ -211,7 +280,7 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
      *
      * @param reportOnly {@code failOn} is {@code none}: findings never fail the build
      */
-    abstract void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException,
+    abstract void afterCheck(RunResult result, boolean reportOnly) throws MojoExecutionException,
             MojoFailureException;
 
     private List<ReportTarget> reportTargets() throws MojoExecutionException {

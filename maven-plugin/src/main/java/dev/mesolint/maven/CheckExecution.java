@@ -1,34 +1,28 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.baseline.Baseline;
-import dev.mesolint.core.cache.CachedCheck;
-import dev.mesolint.core.cache.ResultCache;
 import dev.mesolint.core.config.ConfigProblem;
-import dev.mesolint.core.engine.Checker;
-import dev.mesolint.core.engine.RunReport;
+import dev.mesolint.core.engine.SettingSources;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.report.HtmlOptions;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportOptions;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
-import dev.mesolint.core.review.ChangeReview;
-import dev.mesolint.core.review.NewSinceGate;
-import dev.mesolint.core.review.Review;
-import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.rules.InternalErrorRule;
+import dev.mesolint.core.run.CheckRun;
+import dev.mesolint.core.run.RunRequest;
+import dev.mesolint.core.run.RunResult;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
-import java.util.Optional;
 import java.util.stream.Collectors;
 import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugin.logging.Log;
 
 /**
- * One run of the core for a goal: the cached check, the baseline, the reports. Each step is a core call; this class
- * only logs and turns the core's problems into Maven's exceptions.
+ * One run of the core for a goal, through the core's single run call; this class only logs and turns the core's
+ * problems into Maven's exceptions.
  */
 final class CheckExecution {
     private final Log log;
@@ -39,62 +33,48 @@ final class CheckExecution {
         this.prepared = prepared;
     }
 
-    /** Checks the programmes, reusing what {@code cacheFile} holds when present; then compares with the baseline. */
-    CachedCheck.Outcome check(Optional<Path> cacheFile, boolean ignoreBaseline) throws MojoExecutionException {
-        Optional<ResultCache> cache = cacheFile.map(f -> ResultCache.open(f, prepared.key()));
-        cache.flatMap(ResultCache::discarded).ifPresent(why -> log.debug("mesolint: not reusing earlier results: "
-                + why));
-        cache.filter(c -> c.rejectedEntries() > 0).ifPresent(c -> log.info("mesolint: " + c.rejectedEntries()
-                + " cache entr" + (c.rejectedEntries() == 1 ? "y" : "ies") + " failed the checksum; checked afresh"));
-        CachedCheck.Outcome outcome;
+    /** Runs {@code request} (the prepared one with the goal's cache, baseline and new-since choices). */
+    RunResult run(RunRequest request) throws MojoExecutionException {
+        RunResult result;
         try {
-            outcome = new CachedCheck(prepared.request(), prepared.rules()).run(cache);
+            result = CheckRun.run(request, prepared.rules());
+        } catch (ConfigProblem e) {
+            throw RunSettings.problem(e);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot read the programmes: " + e.getMessage(), e);
         }
-        cache.ifPresent(this::save);
-        if (outcome.reused() > 0) {
-            log.info("mesolint: " + outcome.reused() + " programme" + (outcome.reused() == 1 ? "" : "s")
-                    + " unchanged, results reused from cache" + (outcome.checked() > 0 ? "; " + outcome.checked()
+        SettingSources.describe(result.workspace(), name -> "plugin parameter " + name)
+                .forEach(s -> log.debug("mesolint: " + s));
+        RunResult.CacheUse cache = result.cache();
+        cache.discarded().ifPresent(why -> log.debug("mesolint: not reusing earlier results: " + why));
+        if (cache.rejected() > 0) {
+            log.info("mesolint: " + cache.rejected() + " cache entr" + (cache.rejected() == 1 ? "y" : "ies")
+                    + " failed the checksum; checked afresh");
+        }
+        cache.notSaved().ifPresent(why -> log.warn("mesolint: could not write the result cache "
+                + request.cacheFile().map(Path::toString).orElse("") + ": " + why
+                + "; the next build checks every programme again"));
+        if (cache.reused() > 0) {
+            log.info("mesolint: " + cache.reused() + " programme" + (cache.reused() == 1 ? "" : "s")
+                    + " unchanged, results reused from cache" + (cache.checked() > 0 ? "; " + cache.checked()
                     + " checked" : ""));
         }
-        if (ignoreBaseline) {
+        if (!request.applyBaseline()) {
             log.debug("mesolint: baseline ignored (plugin parameter ignoreBaseline)");
-            return outcome;
         }
-        try {
-            // After the cache: it keeps the findings themselves, so editing the baseline never invalidates it.
-            RunReport compared = Baseline.applyConfigured(prepared.workspace(), outcome.report());
-            return new CachedCheck.Outcome(compared, outcome.reused(), outcome.checked(), outcome.unreadable());
-        } catch (ConfigProblem e) {
-            throw RunSettings.problem(e);
-        }
-    }
-
-    /**
-     * Holds the findings that revision {@code since} already had, with the baseline's safety policy (errors of the
-     * athlete-safety rules and findings of files that did not load, then or now, always count).
-     */
-    CachedCheck.Outcome newSince(CachedCheck.Outcome outcome, String since) throws MojoExecutionException {
-        try {
-            Review review = ChangeReview.run(new ReviewRequest(prepared.options(), prepared.request().inputs(),
-                    Optional.of(since), Optional.empty()), prepared.rules());
-            RunReport gated = new NewSinceGate(prepared.rules()).apply(outcome.report(), review);
-            log.info("mesolint: findings already present at " + since + " are held (newSince); new ones count");
-            return new CachedCheck.Outcome(gated, outcome.reused(), outcome.checked(), outcome.unreadable());
-        } catch (ConfigProblem e) {
-            throw RunSettings.problem(e);
-        }
+        request.newSince().ifPresent(since -> log.info("mesolint: findings already present at " + since
+                + " are held (newSince); new ones count"));
+        return result;
     }
 
     /** Writes every report of the run; a report that cannot be written is a build error. */
-    void writeReports(CachedCheck.Outcome outcome, Duration elapsed, List<ReportTarget> targets, Path folder,
-            boolean showReasons, boolean baselineInForce) throws MojoExecutionException {
+    void writeReports(RunResult result, Duration elapsed, List<ReportTarget> targets, Path folder,
+            boolean showReasons, boolean includeReasons) throws MojoExecutionException {
         try {
-            ReportOptions options = ReportOptions.DEFAULTS.withGitAt(prepared.request().root())
-                    .withBaselineInForce(baselineInForce);
-            RunReports.writeAll(RunReports.input(outcome.report(), prepared.rules(), prepared.request(), elapsed)
-                    .withOptions(options).withHtml(coachReport(targets, showReasons)), targets);
+            ReportOptions options = ReportOptions.DEFAULTS.withGitAt(result.request().root())
+                    .withBaselineInForce(result.baselineInForce()).withIncludeReasons(includeReasons);
+            RunReports.writeAll(RunReports.input(result.report(), prepared.rules(), result.request(), elapsed)
+                    .withOptions(options).withHtml(coachReport(result, targets, showReasons)), targets);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot write the reports to " + folder + ": "
                     + e.getMessage(), e);
@@ -107,29 +87,20 @@ final class CheckExecution {
      * The coach's report options: the repository's plate increment, reasons shown or not, and the run's catalogue
      * (read again only when an HTML report is written, for exercise names and capped regions).
      */
-    private HtmlOptions coachReport(List<ReportTarget> targets, boolean showReasons) {
+    private static HtmlOptions coachReport(RunResult result, List<ReportTarget> targets, boolean showReasons) {
         HtmlOptions options = HtmlOptions.DEFAULTS.withReasons(showReasons)
-                .withPlateIncrement(prepared.workspace().config().plateIncrement());
+                .withPlateIncrement(result.workspace().config().plateIncrement());
         boolean html = targets.stream().anyMatch(t -> t.format() == ReportFormat.HTML
                 || t.format() == ReportFormat.HTML_SHEET);
-        return html ? options.withCatalogue(new Checker(prepared.request(), prepared.rules()).catalogue()) : options;
-    }
-
-    private void save(ResultCache cache) {
-        try {
-            cache.save();
-        } catch (IOException e) {
-            log.warn("mesolint: could not write the result cache " + cache.file() + ": " + e.getMessage()
-                    + "; the next build checks every programme again");
-        }
+        return html ? options.withCatalogue(result.catalogue()) : options;
     }
 
     /** Files that could not be read, or that mesolint failed on, are a build error, not a finding to fix. */
-    static void failOnBrokenRun(CachedCheck.Outcome outcome) throws MojoExecutionException {
-        if (!outcome.unreadable().isEmpty()) {
-            throw new MojoExecutionException("mesolint: cannot read " + outcome.unreadable());
+    static void failOnBrokenRun(RunResult result) throws MojoExecutionException {
+        if (!result.unreadable().isEmpty()) {
+            throw new MojoExecutionException("mesolint: cannot read " + result.unreadable());
         }
-        List<Finding> internal = outcome.report().active().stream()
+        List<Finding> internal = result.report().active().stream()
                 .filter(f -> f.ruleId().equals(InternalErrorRule.ID)).toList();
         if (!internal.isEmpty()) {
             throw new MojoExecutionException("mesolint failed while checking " + internal.size()

@@ -1,6 +1,6 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.CachedCheck;
+import dev.mesolint.core.run.RunResult;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Severity;
 import java.util.ArrayList;
@@ -41,11 +41,11 @@ public class CheckMojo extends AbstractMesolintMojo {
     }
 
     @Override
-    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException,
+    void afterCheck(RunResult result, boolean reportOnly) throws MojoExecutionException,
             MojoFailureException {
-        RunReport run = outcome.report();
+        RunReport run = result.report();
         new FindingLog(getLog(), showWaived).write(run);
-        CheckExecution.failOnBrokenRun(outcome);
+        CheckExecution.failOnBrokenRun(result);
         if (reportOnly) {
             getLog().info("mesolint: failOn is none: findings are reported, never a build failure");
             return;

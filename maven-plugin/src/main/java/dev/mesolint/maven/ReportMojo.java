@@ -1,10 +1,7 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.CachedCheck;
-import dev.mesolint.core.report.ConsoleReport;
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugins.annotations.LifecyclePhase;
 import org.apache.maven.plugins.annotations.Mojo;
 import org.apache.maven.plugins.annotations.Parameter;
@@ -16,7 +13,7 @@ import org.apache.maven.plugins.annotations.Parameter;
  * @since 0.1.0
  */
 @Mojo(name = "report", defaultPhase = LifecyclePhase.VERIFY, threadSafe = true)
-public class ReportMojo extends AbstractMesolintMojo {
+public class ReportMojo extends AbstractReportingMojo {
     static final String ALL = "console,html,json,sarif,junit";
 
     /**
@@ -34,16 +31,5 @@ public class ReportMojo extends AbstractMesolintMojo {
     @Override
     List<String> reportFormats() {
         return reports;
-    }
-
-    @Override
-    boolean useCache() {
-        return false;
-    }
-
-    @Override
-    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException {
-        getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        CheckExecution.failOnBrokenRun(outcome);
     }
 }

@@ -1,20 +1,16 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.ConfigurationKey;
 import dev.mesolint.core.config.ConfigProblem;
 import dev.mesolint.core.config.ProfileRef;
 import dev.mesolint.core.config.RepositoryLayout;
 import dev.mesolint.core.config.SettingNames;
-import dev.mesolint.core.engine.CheckRequest;
 import dev.mesolint.core.engine.InstalledRules;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunOptions;
-import dev.mesolint.core.engine.SettingSources;
-import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.run.RunRequest;
 import java.io.File;
-import java.io.IOException;
 import java.nio.file.FileSystems;
 import java.nio.file.Path;
 import java.nio.file.PathMatcher;
@@ -25,8 +21,8 @@ import java.util.Optional;
 import org.apache.maven.plugin.MojoExecutionException;
 
 /**
- * The Mojo parameters that decide what is checked and how, handed to the core's {@link Workspace} (which reads the
- * repository configuration and lets the parameters win). Values that are {@code null} were not set.
+ * The Mojo parameters that decide what is checked and how, as the core's run request (the core reads the repository
+ * configuration and lets the parameters win). Values that are {@code null} were not set.
  */
 record RunSettings(Path projectDir, File programmes, File config, String profile, String failOn, List<File> catalogues,
         File baseline, List<String> includes, List<String> excludes) {
@@ -36,14 +32,8 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
             "config (mesolint.config)", SettingNames.PROFILE, "profile (mesolint.profile)", SettingNames.BASELINE,
             "baseline (mesolint.baseline)"));
 
-    /** Everything a run needs, the cache key and, for the debug log, where each setting came from. */
-    record Prepared(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, ConfigurationKey key,
-            List<String> sources, RunOptions options) {
-
-        /** The same run, its file reports keeping the training figures only when a report shows them. */
-        Prepared keepingFigures(boolean keep) {
-            return new Prepared(workspace, request.keepingFigures(keep), rules, key, sources, options);
-        }
+    /** The run to ask the core for (before the goal adds its cache and baseline choices), and the rules. */
+    record Prepared(RunRequest request, List<RuleDefinition> rules) {
     }
 
     Prepared prepare() throws MojoExecutionException {
@@ -80,14 +70,9 @@ record RunSettings(Path projectDir, File programmes, File config, String profile
                 Optional.ofNullable(baseline).map(File::toPath)).namedAs(PARAMETERS);
         try {
             List<RuleDefinition> rules = InstalledRules.discover(RunSettings.class.getClassLoader()).rules();
-            Workspace workspace = Workspace.open(options, rules);
-            CheckRequest request = workspace.request(selected());
-            return new Prepared(workspace, request, rules, ConfigurationKey.of(workspace, request, rules),
-                    SettingSources.describe(workspace, name -> "plugin parameter " + name), options);
+            return new Prepared(RunRequest.of(options, selected()), rules);
         } catch (ConfigProblem e) {
             throw problem(e);
-        } catch (IOException e) {
-            throw new MojoExecutionException("mesolint: cannot read a configuration file: " + e.getMessage(), e);
         }
     }
 

@@ -1,7 +1,5 @@
 package dev.mesolint.maven;
 
-import dev.mesolint.core.cache.CachedCheck;
-import dev.mesolint.core.report.ConsoleReport;
 import java.io.File;
 import java.util.List;
 import java.util.Locale;
@@ -25,7 +23,7 @@ import org.apache.maven.reporting.MavenReportException;
  * @since 0.1.0
  */
 @Mojo(name = "site-report", threadSafe = true)
-public class SiteReportMojo extends AbstractMesolintMojo implements MavenReport {
+public class SiteReportMojo extends AbstractReportingMojo implements MavenReport {
     static final String OUTPUT_NAME = "mesolint";
 
     /**
@@ -53,17 +51,6 @@ public class SiteReportMojo extends AbstractMesolintMojo implements MavenReport 
     @Override
     File reportFolder() {
         return siteDirectory;
-    }
-
-    @Override
-    boolean useCache() {
-        return false;
-    }
-
-    @Override
-    void afterCheck(CachedCheck.Outcome outcome, boolean reportOnly) throws MojoExecutionException {
-        getLog().info("mesolint: " + ConsoleReport.summary(outcome.report()));
-        CheckExecution.failOnBrokenRun(outcome);
     }
 
     @Override

@@ -1,6 +1,7 @@
 package dev.mesolint.maven;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -165,6 +166,34 @@ class CheckMojoTests {
     }
 
     @Test
+    void constraintReasonsStayOutOfSarifAndJsonUnlessIncludeReasons() throws Exception {
+        String reason = "Harbourside clinic note P-5120";
+        MojoFixture repo = new MojoFixture(dir).programme("avoid.yaml", MojoFixture.PROGRAMME.replace(
+                "session-minutes: 60\n", "session-minutes: 60\nathlete:\n  constraints:\n"
+                        + "    - avoid: [barbell-bench-press]\n      reason: " + reason + "\n"));
+        Path sarif = dir.resolve("target/mesolint/mesolint.sarif");
+        // First checked afresh, then from the cache (which keeps no programme): the reason is left out both times.
+        for (int run = 0; run < 2; run++) {
+            CheckMojo mojo = repo.check();
+            mojo.reports = List.of("sarif");
+            assertThrows(MojoFailureException.class, mojo::execute);
+            String text = Files.readString(sarif);
+            assertTrue(text.contains("constraint-avoid") && text.contains("(reason left out)"), text);
+            assertFalse(text.contains(reason), text);
+        }
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: 1 programme unchanged, results reused from cache"),
+                repo.log.text());
+        assertTrue(repo.log.text().contains(reason), "the build log, read by the coach, keeps the reason");
+
+        CheckMojo kept = repo.check();
+        kept.reports = List.of("sarif", "json");
+        kept.includeReasons = true;
+        assertThrows(MojoFailureException.class, kept::execute);
+        assertTrue(Files.readString(sarif).contains(reason));
+        assertTrue(Files.readString(dir.resolve("target/mesolint/mesolint.json")).contains(reason));
+    }
+
+    @Test
     void anOlderRulesVersionInTheConfigurationIsLoggedAsAWarningWithTheChangesAndFailsNothing() throws Exception {
         Files.writeString(dir.resolve(".mesolint.yaml"), "root: true\nrules-version: 2026.12.0\n");
         MojoFixture repo = new MojoFixture(dir).programme("good.yaml", MojoFixture.PROGRAMME);
@@ -197,6 +226,47 @@ class CheckMojoTests {
         assertTrue(e.getMessage().contains("(fix: keep the file inside the repository)"), e.getMessage());
         assertTrue(!e.getMessage().contains("--") && !e.getMessage().contains("allowOutsideRoot"),
                 "no option the plugin does not have: " + e.getMessage());
+    }
+
+    @Test
+    void aRunThatFindsNoProgrammeFailsTheBuildAndSaysWhy() throws Exception {
+        Files.createDirectories(dir.resolve("programmes/empty-block"));
+        Files.writeString(dir.resolve("programmes/notes.txt"), "not a programme\n");
+        CheckMojo mojo = new MojoFixture(dir).check();
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertEquals("mesolint: no programme file (*.yaml, *.yml) found in programmes: nothing was checked; check "
+                + "programmes (mesolint.programmes), includes and excludes, or set allowEmpty (mesolint.allowEmpty) "
+                + "when that is expected", error.getMessage());
+    }
+
+    @Test
+    void excludesThatLeaveNothingFailTheBuildToo() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.excludes = List.of("**");
+        MojoExecutionException error = assertThrows(MojoExecutionException.class, mojo::execute);
+        assertTrue(error.getMessage().startsWith("mesolint: no programme file (*.yaml, *.yml) found in programmes "
+                + "outside excludes [**]: nothing was checked"), error.getMessage());
+    }
+
+    @Test
+    void allowEmptyLetsAnEmptyRunPassAndSaysSo() throws Exception {
+        Files.createDirectories(dir.resolve("programmes"));
+        MojoFixture repo = new MojoFixture(dir);
+        CheckMojo mojo = repo.check();
+        mojo.allowEmpty = true;
+        mojo.execute();
+        assertTrue(repo.log.lines.contains("[INFO] mesolint: no programme file (*.yaml, *.yml) found in programmes: "
+                + "nothing was checked (allowEmpty)"), repo.log.text());
+    }
+
+    @Test
+    void allowEmptyChangesNothingWhenThereAreProgrammes() throws Exception {
+        MojoFixture repo = repository();
+        CheckMojo mojo = repo.check();
+        mojo.allowEmpty = true;
+        assertThrows(MojoFailureException.class, mojo::execute, "the misspelt exercise still fails the build");
+        assertTrue(repo.log.lines.stream().noneMatch(l -> l.contains("nothing was checked")), repo.log.text());
     }
 
     @Test

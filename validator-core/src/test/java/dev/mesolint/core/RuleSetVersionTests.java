@@ -34,7 +34,8 @@ class RuleSetVersionTests {
     void theRuleSetVersionChangesWheneverWhatTheRulesDecideChanges() throws Exception {
         String digest = digest();
         String hint = "the built-in rule set changed (profiles, rule metadata or model defaults): bump "
-                + "Mesolint.RULE_SET_VERSION, add its CHANGELOG.md section, and record version and digest here ("
+                + "Mesolint.RULE_SET_VERSION, add its '### Rule set' section to core/ruleset/rule-set-changes.md "
+                + "and to CHANGELOG.md, and record version and digest here ("
                 + digest + ")";
         assertEquals(RECORDED_DIGEST, digest, hint);
         assertEquals(RECORDED_VERSION, Mesolint.RULE_SET_VERSION, hint);

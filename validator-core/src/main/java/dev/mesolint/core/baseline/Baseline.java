@@ -221,8 +221,8 @@ public final class Baseline {
         JsonNode format = root.get("format");
         if (format == null || !format.isIntegralNumber() || format.asInt() != FORMAT) {
             throw doc.problemAt("/format", "this is not a format " + FORMAT + " baseline (format 1 matched findings "
-                    + "by their message, which broke on cosmetic edits)", "regenerate it with 'mesolint baseline "
-                    + "PATH... --output " + shown + "'");
+                    + "by their message, which broke on cosmetic edits)",
+                    "regenerate it with 'mesolint baseline PATH... --output " + shown + "'");
         }
         JsonNode list = root.get("findings");
         if (list == null || !list.isArray()) {

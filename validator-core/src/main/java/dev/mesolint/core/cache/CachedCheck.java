@@ -5,6 +5,7 @@ import dev.mesolint.core.engine.Checker;
 import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.ProgrammeFiles;
+import dev.mesolint.core.engine.RunProgress;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.rule.RuleDefinition;
@@ -15,6 +16,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Supplier;
 
 /**
@@ -47,15 +49,27 @@ public final class CachedCheck {
      * result.
      */
     public Outcome run(Optional<ResultCache> cache) throws IOException {
+        return run(cache, RunProgress.NONE);
+    }
+
+    /** As {@link #run(Optional)}, telling {@code progress} after each programme file, reused or checked. */
+    public Outcome run(Optional<ResultCache> cache, RunProgress progress) throws IOException {
         ProgrammeFiles.Discovery found = ProgrammeFiles.find(request.root(), request.inputs(),
-                Set.copyOf(request.extraCatalogues()));
+                request.ownFiles());
         List<Path> files = found.programmes();
         Supplier<Checker> checker = lazily(() -> new Checker(request, rules));
         List<FileReport> reports = new ArrayList<>(cache.flatMap(ResultCache::catalogueReports)
                 .orElseGet(() -> checker.get().catalogueReports()));
         int catalogues = reports.size();
         // Each file is read once, in parallel: its bytes are hashed, and parsed only when the cache has no result.
-        List<Pending> pending = files.parallelStream().map(f -> pending(f, cache, checker)).toList();
+        AtomicInteger done = new AtomicInteger();
+        AtomicInteger findings = new AtomicInteger();
+        List<Pending> pending = files.parallelStream().map(f -> {
+            Pending p = pending(f, cache, checker);
+            progress.fileChecked(done.incrementAndGet(), files.size(), findings.addAndGet(p.report().findings()
+                    .size()));
+            return p;
+        }).toList();
         pending.forEach(p -> reports.add(p.report()));
 
         int reused = (int) pending.stream().filter(Pending::reused).count();

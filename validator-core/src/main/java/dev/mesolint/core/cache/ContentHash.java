@@ -1,5 +1,6 @@
 package dev.mesolint.core.cache;
 
+import dev.mesolint.core.source.ReadLog;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -23,7 +24,9 @@ public final class ContentHash {
 
     /** The hash of a file's bytes; throws when the file cannot be read. */
     public static String ofFile(Path file) throws IOException {
-        return of(Files.readAllBytes(file));
+        byte[] bytes = Files.readAllBytes(file);
+        ReadLog.record(file, bytes);
+        return of(bytes);
     }
 
     private static MessageDigest digest() {

@@ -2,6 +2,7 @@ package dev.mesolint.core.cache;
 
 import dev.mesolint.core.engine.FileReport;
 import dev.mesolint.core.engine.FileTiming;
+import dev.mesolint.core.engine.OwnFileKind;
 import dev.mesolint.core.engine.ProgrammeIdentity;
 import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.finding.Edit;
@@ -35,6 +36,7 @@ final class FindingCodec {
             identity.put("id", i.id());
             location(identity, i.location());
         });
+        report.checkedAs().ifPresent(kind -> node.put("checkedAs", kind.name()));
         ArrayNode findings = node.putArray("findings");
         report.findings().forEach(f -> findings.add(finding(f)));
         return node;
@@ -49,8 +51,10 @@ final class FindingCodec {
         JsonNode identity = node.get("identity");
         Optional<ProgrammeIdentity> id = identity == null || identity.isNull() ? Optional.empty()
                 : Optional.of(new ProgrammeIdentity(text(identity, "id"), location(identity)));
+        Optional<OwnFileKind> checkedAs = node.hasNonNull("checkedAs")
+                ? Optional.of(OwnFileKind.valueOf(text(node, "checkedAs"))) : Optional.empty();
         return new FileReport(text(node, "file"), Optional.empty(), text(node, "profile"), findings, Optional.empty(),
-                FileTiming.NONE, id);
+                FileTiming.NONE, id, checkedAs);
     }
 
     private static ObjectNode finding(Finding f) {

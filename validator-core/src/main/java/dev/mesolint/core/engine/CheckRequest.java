@@ -38,6 +38,18 @@ public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<P
         return new CheckRequest(inputs, root, failOn, extraCatalogues, configuration, limits, keep);
     }
 
+    /**
+     * mesolint's own files in effect in this run (catalogues, team profile files): read as what they are, so a folder
+     * walk passes over them.
+     */
+    public java.util.Set<Path> ownFiles() {
+        java.util.Set<Path> own = new java.util.HashSet<>(extraCatalogues);
+        if (configuration instanceof ProfileConfiguration profiles) {
+            own.addAll(profiles.profiles().files());
+        }
+        return own;
+    }
+
     public static CheckRequest of(List<Path> inputs, Path root) {
         return new CheckRequest(inputs, root, Severity.ERROR, List.of(), RuleConfiguration.DEFAULTS, YamlLimits.DEFAULTS);
     }

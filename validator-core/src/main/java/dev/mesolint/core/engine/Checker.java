@@ -2,6 +2,7 @@ package dev.mesolint.core.engine;
 
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.CatalogueFile;
+import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.FrameworkRules;
 import dev.mesolint.core.format.CatalogueReader;
@@ -42,6 +43,7 @@ public final class Checker {
     private final Catalogue catalogue;
     private final List<FileReport> catalogueReports;
     private final List<RuleDefinition> rules;
+    private final OwnFileCheck ownFiles;
 
     public Checker(CheckRequest request, List<RuleDefinition> rules) {
         this.request = request;
@@ -62,6 +64,7 @@ public final class Checker {
         }
         this.catalogue = combined;
         this.catalogueReports = List.copyOf(problems);
+        this.ownFiles = new OwnFileCheck(catalogues, this.rules, request.root());
     }
 
     public Catalogue catalogue() {
@@ -96,7 +99,7 @@ public final class Checker {
 
     /** The programme files of the request, and the entries that cannot be read as programmes. */
     public ProgrammeFiles.Discovery discover() {
-        return ProgrammeFiles.find(request.root(), request.inputs(), Set.copyOf(request.extraCatalogues()));
+        return ProgrammeFiles.find(request.root(), request.inputs(), request.ownFiles());
     }
 
     /** One report per entry that should have been a programme but cannot be read as one: never dropped silently. */
@@ -110,25 +113,28 @@ public final class Checker {
     /** Checks one document read elsewhere (standard input), shown and configured as if it were {@code shownAs}. */
     public RunReport run(Path shownAs, byte[] content) {
         List<FileReport> reports = new ArrayList<>(catalogueReports);
-        reports.add(checkFile(shownAs, content));
+        reports.add(checkSafely(shownAs, null, () -> reader.read(content)));
         return new RunReport(reports, request.failOn(), List.of());
     }
 
     /** Checks one programme file; any failure becomes a finding on that file, never an exception. */
     public FileReport checkFile(Path file) {
-        return checkSafely(file, () -> reader.read(file));
+        return checkSafely(file, () -> ConfigDocument.read(file, ProgrammeFiles.display(request.root(), file)),
+                () -> reader.read(file));
     }
 
     /** Checks a programme file whose content the caller has already read (to hash it, say): no second read. */
     public FileReport checkFile(Path file, byte[] content) {
-        return checkSafely(file, () -> reader.read(content));
+        return checkSafely(file, () -> ConfigDocument.read(content, ProgrammeFiles.display(request.root(), file)),
+                () -> reader.read(content));
     }
 
-    private FileReport checkSafely(Path file, DocumentSource source) {
+    /** @param config the file as a configuration document, or null when it cannot be one of mesolint's own files */
+    private FileReport checkSafely(Path file, OwnFileCheck.ConfigSource config, DocumentSource source) {
         String shown = ProgrammeFiles.display(request.root(), file);
         long started = System.nanoTime();
         try {
-            FileReport report = check(source, shown);
+            FileReport report = check(file, config, source, shown);
             return report.withTiming(new FileTiming(Duration.ofNanos(System.nanoTime() - started),
                     report.timing().perRule()));
         } catch (RuntimeException | StackOverflowError e) {
@@ -145,7 +151,7 @@ public final class Checker {
         LocatedDocument read() throws IOException, YamlProblem;
     }
 
-    private FileReport check(DocumentSource source, String shown) {
+    private FileReport check(Path file, OwnFileCheck.ConfigSource config, DocumentSource source, String shown) {
         LocatedDocument document;
         try {
             document = source.read();
@@ -156,6 +162,12 @@ public final class Checker {
             return violationReport(shown, null, FrameworkRules.YAML_SYNTAX,
                     List.of(new Violation(Location.START, "cannot read the file: " + e.getMessage(),
                             "check that the file exists and is readable")));
+        }
+        Optional<OwnFileKind> own = config == null ? Optional.empty() : OwnFileKind.of(file, document.root());
+        if (own.isPresent()) {
+            OwnFileCheck.Problems problems = ownFiles.check(own.get(), file, document, shown, config);
+            FileReport report = violationReport(shown, null, problems.ruleId(), problems.violations());
+            return FileReport.ownFile(shown, report.profile(), report.findings(), own.get());
         }
         List<Violation> violations = programmeSchema.validate(document);
         if (!violations.isEmpty()) {

@@ -18,9 +18,12 @@ import java.util.Optional;
  * @param timing      how long the check took, in all and per rule ({@link FileTiming#NONE} when reused or unknown)
  * @param identity    the programme's id and where it is written, present when the programme loaded (also when the
  *                    findings come from a cache that does not keep the programme)
+ * @param checkedAs   present when the file is one of mesolint's own (a catalogue, profile or configuration found
+ *                    among the programmes) and was checked as that
  */
 public record FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
-        Optional<ProgrammeMetrics> metrics, FileTiming timing, Optional<ProgrammeIdentity> identity) {
+        Optional<ProgrammeMetrics> metrics, FileTiming timing, Optional<ProgrammeIdentity> identity,
+        Optional<OwnFileKind> checkedAs) {
 
     private static final Comparator<Finding> ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
             .thenComparingInt(f -> f.location().column()).thenComparing(Finding::ruleId)
@@ -30,6 +33,19 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
         findings = findings.stream().sorted(ORDER).toList();
         java.util.Objects.requireNonNull(timing, "timing");
         java.util.Objects.requireNonNull(identity, "identity");
+        java.util.Objects.requireNonNull(checkedAs, "checkedAs");
+    }
+
+    /** The report of a programme file (or of a file that did not load as one). */
+    public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings,
+            Optional<ProgrammeMetrics> metrics, FileTiming timing, Optional<ProgrammeIdentity> identity) {
+        this(displayPath, programme, profile, findings, metrics, timing, identity, Optional.empty());
+    }
+
+    /** The report of one of mesolint's own files found among the programmes, checked as {@code kind}. */
+    public static FileReport ownFile(String displayPath, String profile, List<Finding> findings, OwnFileKind kind) {
+        return new FileReport(displayPath, Optional.empty(), profile, findings, Optional.empty(), FileTiming.NONE,
+                Optional.empty(), Optional.of(kind));
     }
 
     /** A report whose programme's id is taken from the programme, located at its header. */
@@ -46,12 +62,12 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
 
     /** This report with its timing. */
     public FileReport withTiming(FileTiming newTiming) {
-        return new FileReport(displayPath, programme, profile, findings, metrics, newTiming, identity);
+        return new FileReport(displayPath, programme, profile, findings, metrics, newTiming, identity, checkedAs);
     }
 
     /** This report with other findings, all else the same. */
     public FileReport withFindings(List<Finding> other) {
-        return new FileReport(displayPath, programme, profile, other, metrics, timing, identity);
+        return new FileReport(displayPath, programme, profile, other, metrics, timing, identity, checkedAs);
     }
 
     /** A report without training-model figures (the file did not load, or figures were not asked for). */

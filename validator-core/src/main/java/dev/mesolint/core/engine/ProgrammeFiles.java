@@ -25,11 +25,13 @@ import java.util.TreeSet;
  * stay inside the repository root. Every entry that looks like a programme but cannot be read as one (a FIFO, a
  * device, a dangling link, a link leading outside the root, a named file without the extension, a folder that cannot
  * be read) is returned as {@link Refused} with the reason, so the run reports it as a located problem. Hidden
- * {@code .yaml} files in folders (other than mesolint's own configuration) are skipped but counted.
+ * {@code .yaml} files in folders (other than mesolint's own configuration) are skipped but counted. A
+ * {@code .mesolint.yaml} below a start folder is returned with the programmes, to be checked as a configuration
+ * ({@link OwnFileKind}): it is never the one in effect, which lies at or above the folders checked.
  */
 public final class ProgrammeFiles {
     /** The repository configuration's file name; never a programme. */
-    private static final String CONFIGURATION = ".mesolint.yaml";
+    static final String CONFIGURATION = ".mesolint.yaml";
 
     private ProgrammeFiles() {
     }
@@ -171,7 +173,7 @@ public final class ProgrammeFiles {
 
                             @Override
                             public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-                                entry(file, attrs, realStart);
+                                entry(file, attrs, start, realStart);
                                 return FileVisitResult.CONTINUE;
                             }
 
@@ -193,13 +195,20 @@ public final class ProgrammeFiles {
             }
         }
 
-        private void entry(Path file, BasicFileAttributes attrs, Path realStart) {
+        private void entry(Path file, BasicFileAttributes attrs, Path start, Path realStart) {
             if (!hasProgrammeExtension(file)) {
                 return;
             }
             Path normal = file.toAbsolutePath().normalize();
             String name = file.getFileName().toString();
-            if (name.equalsIgnoreCase(CONFIGURATION) || own.contains(normal) || own.contains(realOrSelf(file))) {
+            boolean configuration = name.equalsIgnoreCase(CONFIGURATION);
+            // The start folder's own configuration may be the one in effect, read as such; a deeper one never is.
+            if (configuration && start.equals(file.getParent()) || own.contains(normal)
+                    || own.contains(realOrSelf(file))) {
+                return;
+            }
+            if (configuration && attrs.isRegularFile()) {
+                found.add(normal);
                 return;
             }
             if (name.startsWith(".")) {

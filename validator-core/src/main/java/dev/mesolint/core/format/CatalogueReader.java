@@ -60,7 +60,8 @@ public final class CatalogueReader {
         }
     }
 
-    private CatalogueFile read(LocatedDocument document, String displayPath) {
+    /** Reads a catalogue document parsed elsewhere (a catalogue file found among the programmes, say). */
+    public CatalogueFile read(LocatedDocument document, String displayPath) {
         List<Violation> violations = new ArrayList<>(schema.validate(document));
         if (!violations.isEmpty()) {
             return new CatalogueFile(displayPath, List.of(), violations, FrameworkRules.SCHEMA);

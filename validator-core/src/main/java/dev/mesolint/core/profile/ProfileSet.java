@@ -177,6 +177,11 @@ public final class ProfileSet {
     }
 
     /** Every profile name: the built-in ones first. */
+    /** The team profile files loaded (those named and those they extend), as absolute paths. */
+    public Set<Path> files() {
+        return nameByFile.keySet();
+    }
+
     public List<String> names() {
         List<String> names = new ArrayList<>(BuiltInProfiles.NAMES);
         byName.keySet().stream().filter(n -> !names.contains(n)).sorted().forEach(names::add);

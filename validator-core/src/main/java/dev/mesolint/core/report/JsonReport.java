@@ -16,7 +16,8 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * One JSON document per run: the tool, the caution, a summary, each file's findings and, when the training model
- * supplied them, each programme's figures under {@code metrics}. The shape is published as
+ * supplied them, each programme's figures under {@code metrics}. Athlete-constraint reasons are left out unless
+ * {@link ReportOptions#includeReasons()}. The shape is published as
  * {@code docs/schema/report.schema.json}.
  */
 public final class JsonReport implements ReportWriter {
@@ -81,8 +82,9 @@ public final class JsonReport implements ReportWriter {
         node.put("line", f.location().line());
         node.put("column", f.location().column());
         node.put("pointer", f.location().pointer());
-        node.put("message", f.message());
-        node.put("fix", f.fix());
+        ReportedReasons reasons = new ReportedReasons(input.options());
+        node.put("message", reasons.text(f, f.message()));
+        node.put("fix", reasons.text(f, f.fix()));
         input.options().helpUri(f.ruleId()).ifPresent(uri -> node.put("helpUri", uri));
         node.put("fingerprint", Fingerprints.hash(f));
         node.put("baselined", f.baselined());

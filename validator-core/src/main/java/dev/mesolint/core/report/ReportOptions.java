@@ -14,12 +14,14 @@ import java.util.Optional;
  * @param revision        the git commit checked, when known (SARIF's provenance and automation id)
  * @param branch          the git branch checked, when known
  * @param repositoryUri   where the repository lives (the {@code origin} remote), when known
+ * @param includeReasons  keep athlete-constraint reasons (health data) in the SARIF and JSON reports; by default
+ *                        they are left out, as those reports are uploaded to code-scanning services and CI logs
  */
 public record ReportOptions(Optional<String> helpUriBase, boolean baselineInForce, Optional<Severity> junitFailAt,
-        Optional<String> revision, Optional<String> branch, Optional<String> repositoryUri) {
+        Optional<String> revision, Optional<String> branch, Optional<String> repositoryUri, boolean includeReasons) {
 
     public static final ReportOptions DEFAULTS = new ReportOptions(Optional.empty(), false, Optional.empty(),
-            Optional.empty(), Optional.empty(), Optional.empty());
+            Optional.empty(), Optional.empty(), Optional.empty(), false);
 
     public ReportOptions {
         Objects.requireNonNull(helpUriBase, "helpUriBase");
@@ -36,15 +38,15 @@ public record ReportOptions(Optional<String> helpUriBase, boolean baselineInForc
     }
 
     public ReportOptions withHelpUriBase(Optional<String> base) {
-        return new ReportOptions(base, baselineInForce, junitFailAt, revision, branch, repositoryUri);
+        return new ReportOptions(base, baselineInForce, junitFailAt, revision, branch, repositoryUri, includeReasons);
     }
 
     public ReportOptions withBaselineInForce(boolean inForce) {
-        return new ReportOptions(helpUriBase, inForce, junitFailAt, revision, branch, repositoryUri);
+        return new ReportOptions(helpUriBase, inForce, junitFailAt, revision, branch, repositoryUri, includeReasons);
     }
 
     public ReportOptions withJunitFailAt(Optional<Severity> level) {
-        return new ReportOptions(helpUriBase, baselineInForce, level, revision, branch, repositoryUri);
+        return new ReportOptions(helpUriBase, baselineInForce, level, revision, branch, repositoryUri, includeReasons);
     }
 
     /** The git provenance of the repository at {@code root}, when it is one (read from its files). */
@@ -55,6 +57,11 @@ public record ReportOptions(Optional<String> helpUriBase, boolean baselineInForc
 
     public ReportOptions withGit(Optional<String> newRevision, Optional<String> newBranch,
             Optional<String> newRepositoryUri) {
-        return new ReportOptions(helpUriBase, baselineInForce, junitFailAt, newRevision, newBranch, newRepositoryUri);
+        return new ReportOptions(helpUriBase, baselineInForce, junitFailAt, newRevision, newBranch, newRepositoryUri,
+                includeReasons);
+    }
+
+    public ReportOptions withIncludeReasons(boolean include) {
+        return new ReportOptions(helpUriBase, baselineInForce, junitFailAt, revision, branch, repositoryUri, include);
     }
 }

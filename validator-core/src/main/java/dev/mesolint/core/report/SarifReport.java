@@ -21,7 +21,8 @@ import tools.jackson.databind.node.ObjectNode;
  * SARIF 2.1.0: one run, every registered rule in {@code tool.driver.rules} with its reference page inline, one result
  * per reported finding with its region and snippet (waived ones carry an in-source suppression), paths relative to
  * {@code %SRCROOT%} (the repository root), git provenance when known, the caution in the run's and the driver's
- * properties. {@code baselineState} appears only when a baseline was in force; {@code helpUri} only when the front
+ * properties. Athlete-constraint reasons are left out unless {@link ReportOptions#includeReasons()}.
+ * {@code baselineState} appears only when a baseline was in force; {@code helpUri} only when the front
  * end names where the reference pages are published.
  */
 public final class SarifReport implements ReportWriter {
@@ -146,7 +147,8 @@ public final class SarifReport implements ReportWriter {
             result.put("ruleIndex", index);
         }
         result.put("level", level(f.severity()));
-        result.putObject("message").put("text", messageText(f));
+        ReportedReasons reasons = new ReportedReasons(input.options());
+        result.putObject("message").put("text", reasons.text(f, messageText(f)));
         ObjectNode location = result.putArray("locations").addObject();
         ObjectNode physical = location.putObject("physicalLocation");
         physical.set("artifactLocation", artifactLocation(f.file()));
@@ -157,7 +159,7 @@ public final class SarifReport implements ReportWriter {
             region.put("endLine", f.location().endLine()).put("endColumn", f.location().endColumn());
         }
         sources.lines(f.file(), f.location().line(), f.location().endLine())
-                .ifPresent(text -> region.putObject("snippet").put("text", text));
+                .ifPresent(text -> region.putObject("snippet").put("text", reasons.snippet(text)));
         if (!f.location().pointer().isEmpty()) {
             location.putArray("logicalLocations").addObject()
                     .put("fullyQualifiedName", f.location().pointer()).put("kind", "element");

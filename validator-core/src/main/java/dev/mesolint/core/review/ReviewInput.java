@@ -1,5 +1,6 @@
 package dev.mesolint.core.review;
 
+import dev.mesolint.core.finding.ConstraintReasons;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.nio.file.Path;

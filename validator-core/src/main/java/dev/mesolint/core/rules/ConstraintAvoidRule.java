@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.finding.ConstraintReasons;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.programme.AthleteConstraint;
 import dev.mesolint.core.rule.Occurrences;
@@ -39,8 +40,8 @@ public final class ConstraintAvoidRule implements Rule {
                 if (c.avoid().contains(work.exerciseId())) {
                     found.add(week, session, work.exerciseId(), work.exerciseLocation(), work.waivers(),
                             Occurrences.Step.NONE, "the athlete's constraint " + Pointers.readable(
-                                    c.location().pointer()) + " excludes this exercise (reason given: " + c.reason()
-                                    + ")", "remove it or swap it for an exercise the athlete's clinician has cleared; "
+                                    c.location().pointer()) + " excludes this exercise " + ConstraintReasons.MARK
+                                    + c.reason() + ")", "remove it or swap it for an exercise the athlete's clinician has cleared; "
                                             + "their advice comes before any general guidance");
                 }
             }

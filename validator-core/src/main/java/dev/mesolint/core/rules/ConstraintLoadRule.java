@@ -2,6 +2,7 @@ package dev.mesolint.core.rules;
 
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Region;
+import dev.mesolint.core.finding.ConstraintReasons;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.OneRepMaxRelation;
 import dev.mesolint.core.model.SessionMetrics;
@@ -177,7 +178,7 @@ public final class ConstraintLoadRule implements Rule {
 
     private static String cap(Hit hit, double cap) {
         String region = hit.region().yamlName();
-        return "the athlete's " + Texts.percent(cap) + " cap for the " + region + " (reason given: "
+        return "the athlete's " + Texts.percent(cap) + " cap for the " + region + " " + ConstraintReasons.MARK
                 + hit.constraint().reason() + "); this exercise loads the " + region;
     }
 }

@@ -94,6 +94,7 @@ public final class SafeFiles {
             if (bytes.length > maxBytes) {
                 throw tooLarge(bytes.length, maxBytes);
             }
+            ReadLog.record(file, bytes);
             return bytes;
         }
     }

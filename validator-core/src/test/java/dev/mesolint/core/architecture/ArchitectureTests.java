@@ -32,11 +32,36 @@ class ArchitectureTests {
                 "org.codehaus.plexus..").check(CORE);
     }
 
+    /**
+     * The core names a front end's settings only through {@code SettingNames}, so a problem reads in the caller's
+     * words: no command-line option ({@code "--config"}) is written in its sources, except in the text of a
+     * {@code 'mesolint ...'} command a hint quotes.
+     */
+    @Test
+    void theCoreWritesNoCommandLineOptionNames() throws java.io.IOException {
+        java.util.regex.Pattern option = java.util.regex.Pattern.compile("\"[^\"]*(?<![\\w(-])--[a-z][a-z-]+");
+        try (java.util.stream.Stream<java.nio.file.Path> files = java.nio.file.Files.walk(
+                java.nio.file.Path.of("src/main/java"))) {
+            java.util.List<String> found = files.filter(f -> f.toString().endsWith(".java")).flatMap(f -> {
+                try {
+                    return java.nio.file.Files.readAllLines(f).stream()
+                            .filter(l -> option.matcher(l).find() && !l.contains("'mesolint "))
+                            .map(l -> f.getFileName() + ": " + l.strip());
+                } catch (java.io.IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
+            }).toList();
+            org.junit.jupiter.api.Assertions.assertEquals(java.util.List.of(), found,
+                    "name settings through SettingNames (RunOptions.names()), not as options");
+        }
+    }
+
     @Test
     void noRuleClassIsNamedByTheEngineReportsProfilesOrBaselines() {
         noClasses().that().resideInAnyPackage("dev.mesolint.core.engine..", "dev.mesolint.core.report..",
                         "dev.mesolint.core.profile..", "dev.mesolint.core.baseline..", "dev.mesolint.core.cache..",
-                        "dev.mesolint.core.config..", "dev.mesolint.core.format..")
+                        "dev.mesolint.core.config..", "dev.mesolint.core.format..",
+                        "dev.mesolint.core.run..")
                 .should().dependOnClassesThat(describe("rule classes",
                         (JavaClass c) -> c.isAssignableTo(RuleDefinition.class) && !c.isInterface()))
                 .check(CORE);

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.engine.RunOptions;
+import dev.mesolint.core.finding.ConstraintReasons;
 import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.List;

@@ -1,17 +1,20 @@
-package dev.mesolint.core.review;
+package dev.mesolint.core.finding;
 
 /**
  * Leaves the reasons of athlete constraints out of a message. The constraint rules quote the reason as
- * {@code (reason given: ...)}; a reason is health data and does not belong in a comment others read.
+ * {@code (reason given: ...)}; a reason is health data and does not belong in a comment others read, nor in a report
+ * uploaded to a code-scanning service.
  */
-final class ConstraintReasons {
-    static final String MARK = "(reason given: ";
-    static final String LEFT_OUT = "(reason left out)";
+public final class ConstraintReasons {
+    /** How a rule quotes a reason in a message; {@link #leaveOut} finds it by this. */
+    public static final String MARK = "(reason given: ";
+    public static final String LEFT_OUT = "(reason left out)";
 
     private ConstraintReasons() {
     }
 
-    static String leaveOut(String message) {
+    /** {@code message} with each {@code (reason given: ...)}, nested brackets and all, as {@link #LEFT_OUT}. */
+    public static String leaveOut(String message) {
         StringBuilder out = new StringBuilder();
         int from = 0;
         int at;
