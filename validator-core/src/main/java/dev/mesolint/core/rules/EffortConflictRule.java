@@ -15,26 +15,32 @@ import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.RirRange;
 import dev.mesolint.core.value.Rpe;
+import dev.mesolint.core.rule.RuleParameter;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * The efforts a set states agree with each other: the load against the reps and reserve, and RIR against RPE.
  *
- * <p>Two severities: a load that cannot be lifted for the prescribed reps is always an {@code error} (the set cannot
- * be done as written); every other disagreement takes the rule's configured severity ({@code warning} by default).
- * A profile that sets the rule {@code off} silences both.
+ * <p>Three severities: a load that cannot be lifted for the prescribed reps is an {@code error} (the set cannot be
+ * done as written), unless it is an absolute load that a 1RM risen at a plausible rate since it was stated would
+ * allow: then it is an {@code info}, 1RM out of date ({@link RisingOneRepMax}); every other disagreement takes the
+ * rule's configured severity ({@code warning} by default). A profile that sets the rule {@code off} silences all.
  */
 public final class EffortConflictRule implements Rule {
     public static final String ID = "effort-conflict";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "The efforts a set states agree: its load allows the prescribed reps (error if not), and does not leave "
-                    + "far more in reserve than stated; RIR and RPE agree.",
-            Severity.WARNING, RuleMetadata.Category.EFFORT, StrengthSets.parameters(),
+            "The efforts a set states agree: its load allows the prescribed reps (error if not; info, 1RM out of "
+                    + "date, for an absolute load a plausible rise of the 1RM explains), and does not leave far more "
+                    + "in reserve than stated; RIR and RPE agree.",
+            Severity.WARNING, RuleMetadata.Category.EFFORT, parameters(),
             "A set that gives both a load and a reserve says the same thing twice, and the two must fit the "
                     + "published relation between %1RM and reps to failure (NSCA Table 17.7; Brzycki by default). A "
-                    + "load that allows fewer reps than prescribed cannot be done as written and is always an error, "
-                    + "whatever severity the profile gives the rule (a profile can only turn the rule off). A load "
+                    + "load that allows fewer reps than prescribed cannot be done as written and is an error, "
+                    + "whatever severity the profile gives the rule (a profile can only turn the rule off), unless "
+                    + "a risen 1RM explains it (below). A load "
                     + "that leaves far more reps in reserve than stated (mislabelled), a load that fits the reps but "
                     + "not the reserve, and RIR and RPE that disagree are reported at the rule's severity (warning). "
                     + "Reps at a given %1RM vary between people and exercises, and reserve estimates err by more than "
@@ -44,9 +50,15 @@ public final class EffortConflictRule implements Rule {
                     + "compared. Under the strength and general-fitness profiles, a strength-purpose set (at most 6 "
                     + "reps at 60% of 1RM or more) that leaves more in reserve than stated is not called "
                     + "mislabelled: heavy low-rep sets stay far from failure on purpose, and the stated reserve "
-                    + "there is a ceiling on effort, not a target.",
+                    + "there is a ceiling on effort, not a target. " + RisingOneRepMax.RATIONALE,
             "Haff & Triplett 2016, NSCA Essentials 4th ed., Ch. 17, Table 17.7; Brzycki 1993; Zourdos et al. 2016, "
-                    + "JSCR 30(1):267-275; Hackett et al. 2017, JSCR 31:2162-2168");
+                    + "JSCR 30(1):267-275; Hackett et al. 2017, JSCR 31:2162-2168; " + RisingOneRepMax.SOURCE);
+
+    private static List<RuleParameter> parameters() {
+        List<RuleParameter> all = new ArrayList<>(StrengthSets.parameters());
+        all.addAll(RisingOneRepMax.parameters());
+        return List.copyOf(all);
+    }
 
     @Override
     public RuleMetadata metadata() {
@@ -56,7 +68,8 @@ public final class EffortConflictRule implements Rule {
     @Override
     public void check(RuleContext context) {
         OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
-        Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
+        Occurrences.SetHits<Optional<RisingOneRepMax.Reading>> groups = new Occurrences.SetHits<>();
+        OutOfDateOneRepMax outOfDate = new OutOfDateOneRepMax(context, relation);
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
@@ -65,18 +78,31 @@ public final class EffortConflictRule implements Rule {
                     }
                     String key = set.agreement().status() == AgreementStatus.RIR_RPE_DIFFER ? "rpe" : "load";
                     Location where = context.fieldLocation(set.prescription(), key);
+                    Optional<RisingOneRepMax.Reading> reading = set.agreement().status() == AgreementStatus.INFEASIBLE
+                            ? RisingOneRepMax.of(context, week.number(), session.day(), set, relation)
+                            : Optional.empty();
+                    if (reading.isPresent() && reading.get().plausible()) {
+                        outOfDate.add(week, session, set, where, reading.get());
+                        continue;
+                    }
+                    // A reading quotes figures of its week, so its hits group by week.
                     groups.add(week, session, set, where, List.of(set.agreement().status(),
-                            EffortText.prescription(set.prescription())), set);
+                            EffortText.prescription(set.prescription()), reading.isPresent() ? week.number() : 0),
+                            reading);
                 }
             }
         }
         Occurrences found = new Occurrences();
-        for (Occurrences.Group<SetMetrics> group : groups.groups()) {
+        for (Occurrences.Group<Optional<RisingOneRepMax.Reading>> group : groups.groups()) {
             SetMetrics set = group.first();
             EffortAgreement agreement = set.agreement();
             Severity severity = agreement.status() == AgreementStatus.INFEASIBLE ? Severity.ERROR : context.severity();
-            group.add(found, severity, group.label() + ": " + problem(set, relation), fix(context, set, relation));
+            String risen = group.values().get(0).map(r -> "; " + OutOfDateOneRepMax.implausible(context, r, relation))
+                    .orElse("");
+            group.add(found, severity, group.label() + ": " + problem(set, relation) + risen,
+                    fix(context, set, relation));
         }
+        outOfDate.addTo(found);
         found.report(context);
     }
 
@@ -148,7 +174,7 @@ public final class EffortConflictRule implements Rule {
     }
 
     /** The least reserve the set states: its RIR's lower end, else its RPE read as RIR. */
-    private static double leastStated(SetPrescription p) {
+    static double leastStated(SetPrescription p) {
         return p.rir().map(RirRange::min).orElseGet(() -> p.rpe().map(Rpe::repsInReserve).orElse(0.0));
     }
 }
