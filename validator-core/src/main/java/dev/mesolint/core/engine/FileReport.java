@@ -12,7 +12,8 @@ import java.util.Optional;
  * The outcome of checking one file.
  *
  * @param displayPath the path relative to the checked root, '/'-separated
- * @param programme   present when the file loaded (even if rules then found problems)
+ * @param programme   present when the file loaded (even if rules then found problems) and the run keeps the model
+ *                    for a report that shows it ({@link CheckRequest#keepFigures()}); see {@link #loaded()}
  * @param profile     the rule profile the file was checked under
  * @param metrics     the training-model figures, present when the programme loaded
  * @param timing      how long the check took, in all and per rule ({@link FileTiming#NONE} when reused or unknown)
@@ -73,6 +74,14 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
     /** A report without training-model figures (the file did not load, or figures were not asked for). */
     public FileReport(String displayPath, Optional<Programme> programme, String profile, List<Finding> findings) {
         this(displayPath, programme, profile, findings, Optional.empty());
+    }
+
+    /**
+     * Whether the file loaded as what it is: a programme (also when its findings come from the cache, or the run did
+     * not keep the model), or one of mesolint's own files checked as that.
+     */
+    public boolean loaded() {
+        return programme.isPresent() || identity.isPresent() || checkedAs.isPresent() && findings.isEmpty();
     }
 
     /** Findings that count (not waived, not off, not held by the baseline). */

@@ -62,7 +62,7 @@ public final class JsonReport implements ReportWriter {
     private static ObjectNode file(ReportInput input, FileReport file) {
         ObjectNode node = JsonText.object();
         node.put("path", file.displayPath());
-        node.put("loaded", file.programme().isPresent());
+        node.put("loaded", file.loaded());
         node.put("profile", file.profile());
         file.programme().ifPresent(p -> {
             ObjectNode programme = node.putObject("programme");

@@ -50,7 +50,7 @@ public final class JunitReport implements ReportWriter {
     }
 
     private static Suite suite(ReportInput input, FileReport file) {
-        boolean loaded = file.programme().isPresent();
+        boolean loaded = file.loaded();
         Severity failAt = input.options().junitFailAt().orElse(input.run().failOn());
         List<Case> cases = new ArrayList<>();
         for (RuleDefinition rule : input.rulesRunUnder(file.profile())) {

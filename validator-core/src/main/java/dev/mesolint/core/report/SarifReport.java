@@ -14,6 +14,7 @@ import java.net.URI;
 import java.net.URISyntaxException;
 import java.util.List;
 import java.util.Locale;
+import java.util.stream.Stream;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -68,25 +69,20 @@ public final class SarifReport implements ReportWriter {
         // consumer supplies the root (SARIF 2.1.0, 3.14.14: a base id without a uri is resolved by the consumer).
         run.putObject("originalUriBaseIds").putObject(SRCROOT)
                 .putObject("description").put("text", "The folder that the checked programme paths are relative to.");
-        ArrayNode results = run.putArray("results");
+        // A placeholder keeps the field's place: the results are made one by one as they are written.
+        run.putArray("results");
         SourceLines sources = new SourceLines(input.root());
-        for (FileReport file : input.run().files()) {
-            for (Finding f : file.findings()) {
-                if (f.severity() != Severity.OFF) {
-                    results.add(result(input, f, sources));
-                }
-            }
-        }
+        Stream<ObjectNode> found = input.run().files().stream().flatMap(file -> file.findings().stream())
+                .filter(f -> f.severity() != Severity.OFF).map(f -> result(input, f, sources));
         // Resolved findings are located in the base revision's files, which are not on disk: no snippets.
-        for (Finding f : absent) {
-            results.add(result(input, f, SourceLines.none()).put("baselineState", "absent"));
-        }
+        Stream<ObjectNode> resolved = absent.stream()
+                .map(f -> result(input, f, SourceLines.none()).put("baselineState", "absent"));
         run.put("columnKind", "unicodeCodePoints");
         ObjectNode properties = run.putObject("properties");
         properties.put("caution", Mesolint.CAUTION);
         properties.put("failOn", input.run().failOn().label());
         properties.put("failed", input.run().failed());
-        JsonText.write(log, out);
+        JsonText.write(log, run, "results", Stream.concat(found, resolved).iterator(), out);
     }
 
     private static ObjectNode tool(ReportInput input) {

@@ -4,13 +4,11 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 
 /**
- * The lines of checked files, read once per file while a report is written, for snippets. A file that has changed
+ * The lines of checked files, read once per file while a report is written file by file, for snippets. A file that has changed
  * or gone since the check, or is not text, simply gives no snippet.
  */
 final class SourceLines {
@@ -18,7 +16,9 @@ final class SourceLines {
     private static final int MAX_LENGTH = 400;
 
     private final Path root;
-    private final Map<String, List<String>> files = new HashMap<>();
+    // Only the last file read: reports go file by file, and holding every file's text filled the heap on big runs.
+    private String lastPath;
+    private List<String> lastLines = List.of();
 
     SourceLines(Path root) {
         this.root = root;
@@ -37,7 +37,11 @@ final class SourceLines {
      * the root, or absolute), joined by newlines.
      */
     Optional<String> lines(String shownPath, int first, int last) {
-        List<String> lines = files.computeIfAbsent(shownPath, this::read);
+        if (!shownPath.equals(lastPath)) {
+            lastLines = read(shownPath);
+            lastPath = shownPath;
+        }
+        List<String> lines = lastLines;
         if (first < 1 || first > lines.size()) {
             return Optional.empty();
         }
