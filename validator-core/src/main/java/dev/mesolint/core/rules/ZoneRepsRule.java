@@ -24,23 +24,29 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 
 /**
- * A lift's reps in one intensity zone in one session fall outside the total range of Prilepin's table for that
- * zone. One finding per lift and direction (under or over), naming each zone, its range and the sessions.
+ * A lift's reps in one intensity zone in one session pass the upper total of Prilepin's table for that zone (and, when
+ * a team asks, fall under its lower total). One finding per lift and direction, naming each zone, its range and the
+ * sessions.
  */
 public final class ZoneRepsRule implements Rule {
     public static final String ID = "zone-reps";
     private static final int ZONES = 4;
     /** Shares of 1RM on a zone bound count in the zone above, as the model's figures count them. */
     private static final double EPSILON = 1e-9;
+    static final String UNDER_TOTALS = "under-totals";
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
-            "A main lift's reps per session in each intensity zone of 1RM stay within the totals of Prilepin's "
-                    + "table for that zone: from {zone1-min-reps}-{zone1-max-reps} in the lowest zone to "
-                    + "{zone4-min-reps}-{zone4-max-reps} in the highest.",
+            "A main lift's reps per session in each intensity zone of 1RM stay within the upper totals of "
+                    + "Prilepin's table for that zone: {zone1-max-reps} in the lowest zone to {zone4-max-reps} in the "
+                    + "highest.",
             Severity.INFO, RuleMetadata.Category.VOLUME, parameters(),
             "Prilepin's table summarises how many reps a session elite weightlifters did at each intensity in the "
                     + "competition lifts: far more than the upper total at a zone tends to mean too much heavy work "
-                    + "in one session, far fewer that the zone is touched rather than trained. It describes those "
+                    + "in one session, far fewer that the zone is touched rather than trained. Only the upper totals "
+                    + "are read by default: sessions under a lower total are normal in sound programmes (a novice's "
+                    + "one set of five deadlifts, a peak's heavy singles, a technique day), and asking for more sets "
+                    + "there would be advice coaches reject; a team that wants them read sets under-totals to 1. "
+                    + "The table describes those "
                     + "lifters, not every lifter, and its published versions differ, so the rule is an info, is on "
                     + "only under the strength profile, and its zone bounds (the model's intensityZone1From to "
                     + "intensityZone4From) and totals are parameters. Only main lifts are read (role: main, written or the "
@@ -58,6 +64,8 @@ public final class ZoneRepsRule implements Rule {
 
     private static List<RuleParameter> parameters() {
         List<RuleParameter> all = new ArrayList<>();
+        all.add(RuleParameter.integer(UNDER_TOTALS, 0, 0, 1,
+                "1 also reports sessions under a zone's lower total; 0 (the default) reads the upper totals only."));
         for (int zone = 1; zone <= ZONES; zone++) {
             String name = "zone " + zone + " (from intensityZone" + zone + "From)";
             all.add(RuleParameter.integer(minName(zone), PrilepinTable.minReps(zone), 0, 100,
@@ -123,7 +131,7 @@ public final class ZoneRepsRule implements Rule {
             return 0;
         }
         if (reps < context.param(minName(zone))) {
-            return -1;
+            return context.param(UNDER_TOTALS) >= 1 ? -1 : 0;
         }
         return reps > context.param(maxName(zone)) ? 1 : 0;
     }

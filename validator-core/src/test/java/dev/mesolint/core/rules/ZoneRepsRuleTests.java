@@ -48,13 +48,16 @@ class ZoneRepsRuleTests {
     @Test
     void oneFindingPerLiftAndSideNamesEveryZoneAndSession() {
         // Week 1: 1 x 3 at 85% = 3 reps (80-90%: 10-20) and 1 x 2 at 92.5% = 2 reps (90% and over: 4-10);
-        // week 2 repeats the triple with 6 reps (2 x 3): both under.
-        List<Finding> findings = run(RuleRun.defaults(), programme(
+        // week 2 repeats the triple with 6 reps (2 x 3): both under, read when a team asks for lower totals.
+        String text = programme(
                 week(1, false, session(1,
                         exercise("barbell-back-squat", "sets: 1\nreps: 3\nload: 85%\nrest: 3min"),
                         exercise("barbell-back-squat", "sets: 1\nreps: 2\nload: 92.5%\nrest: 3min"))),
                 week(2, false, session(1,
-                        exercise("barbell-back-squat", "sets: 2\nreps: 3\nload: 85%\nrest: 3min")))));
+                        exercise("barbell-back-squat", "sets: 2\nreps: 3\nload: 85%\nrest: 3min"))));
+        // By default a session under a lower total is not reported: heavy singles and triples are sound practice.
+        assertEquals(List.of(), run(RuleRun.defaults(), text));
+        List<Finding> findings = run(RuleRun.defaults().param(ZoneRepsRule.ID, ZoneRepsRule.UNDER_TOTALS, 1), text);
         assertEquals(1, findings.size(), findings.toString());
         assertEquals("barbell-back-squat, weeks 1-2: fewer reps a session than Prilepin's table gives for each "
                 + "zone: 80-90% of 1RM (10-20): 3 to 6 reps in 2 sessions, weeks 1-2 (fewest 3 in week 1 day 1); "
