@@ -4,6 +4,7 @@ import dev.mesolint.core.model.IntensityZone;
 import dev.mesolint.core.model.LiftSession;
 import dev.mesolint.core.model.LiftWeek;
 import dev.mesolint.core.model.ModelParameters;
+import dev.mesolint.core.model.PrilepinTable;
 import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.WeekMetrics;
@@ -21,11 +22,7 @@ import java.util.Set;
  * in some week are shown.
  */
 final class StrengthView {
-    /**
-     * Prilepin's total reps in a session for zones 1 to 4 (55-70%, 70-80%, 80-90%, 90% and over), as docs/model.md
-     * gives them: the version most often reproduced in English, from memory. Shown only with the default zone bounds.
-     */
-    static final int[][] PRILEPIN_SESSION_REPS = {{18, 30}, {12, 24}, {10, 20}, {4, 10}};
+    /** Prilepin's ranges ({@link PrilepinTable}) are shown only with the default zone bounds. */
     private static final double[] DEFAULT_BOUNDS = {0.55, 0.70, 0.80, 0.90};
 
     private StrengthView() {
@@ -144,8 +141,8 @@ final class StrengthView {
         for (IntensityZone z : header) {
             page.append("<th scope=\"col\">").append(Html.esc(zoneName(z)));
             if (prilepin && z.index() >= 1) {
-                int[] range = PRILEPIN_SESSION_REPS[z.index() - 1];
-                page.append("<span class=\"detail\">Prilepin ").append(range[0]).append("–").append(range[1])
+                page.append("<span class=\"detail\">Prilepin ").append(PrilepinTable.minReps(z.index())).append("–")
+                        .append(PrilepinTable.maxReps(z.index()))
                         .append("</span>");
             }
             page.append("</th>");
@@ -167,12 +164,13 @@ final class StrengthView {
         }
         String reps = Html.num(z.reps());
         if (prilepin && z.index() >= 1) {
-            int[] range = PRILEPIN_SESSION_REPS[z.index() - 1];
-            if (z.reps() > range[1]) {
-                return "<td class=\"out\">" + reps + " ▲ <span class=\"detail\">above " + range[1] + "</span></td>";
+            int min = PrilepinTable.minReps(z.index());
+            int max = PrilepinTable.maxReps(z.index());
+            if (z.reps() > max) {
+                return "<td class=\"out\">" + reps + " ▲ <span class=\"detail\">above " + max + "</span></td>";
             }
-            if (z.reps() < range[0]) {
-                return "<td class=\"out\">" + reps + " ▼ <span class=\"detail\">below " + range[0] + "</span></td>";
+            if (z.reps() < min) {
+                return "<td class=\"out\">" + reps + " ▼ <span class=\"detail\">below " + min + "</span></td>";
             }
         }
         return "<td>" + reps + "</td>";

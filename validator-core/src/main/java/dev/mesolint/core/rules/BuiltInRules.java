@@ -32,6 +32,7 @@ public final class BuiltInRules {
                 new SessionTimeRule(),
                 new VolumeSpikeRule(),
                 new IntensityJumpRule(),
+                new ZoneRepsRule(),
                 new NoDeloadRule(),
                 new UnstableSurfaceRule(),
                 new NoviceHeavyComplexRule(),

@@ -50,11 +50,18 @@ class ProfileTests {
         assertEquals(List.of("hypertrophy", "strength", "general-fitness"), ProfileSet.builtIn(rules).names());
     }
 
+    /** Rules that only another built-in profile turns on: hypertrophy has them off, with the default parameters. */
+    private static final java.util.Set<String> ON_ONLY_UNDER_ANOTHER_PROFILE = java.util.Set.of("zone-reps");
+
     @Test
     void hypertrophyIsTheMetadataDefaults() {
         ResolvedProfile hypertrophy = ProfileSet.builtIn(rules).get(BuiltInProfiles.DEFAULT);
         for (RuleDefinition r : rules) {
-            assertEquals(RuleSettings.defaults(r.metadata()), hypertrophy.settings(r), r.id());
+            RuleSettings expected = RuleSettings.defaults(r.metadata());
+            if (ON_ONLY_UNDER_ANOTHER_PROFILE.contains(r.id())) {
+                expected = expected.with(Severity.OFF);
+            }
+            assertEquals(expected, hypertrophy.settings(r), r.id());
         }
     }
 
@@ -99,6 +106,14 @@ class ProfileTests {
         assertEquals(Severity.OFF, gf.settings(rule("unstable-surface")).severity());
         assertEquals(Severity.INFO, gf.settings(rule("fatigue-technique")).severity());
         assertEquals(Severity.WARNING, gf.settings(rule("short-rest-compound")).severity());
+    }
+
+    @Test
+    void zoneRepsIsAnInfoUnderTheStrengthProfileOnlyAsPrilepinsTableDescribesCompetitionLifts() {
+        ProfileSet set = ProfileSet.builtIn(rules);
+        assertEquals(Severity.INFO, set.get("strength").settings(rule("zone-reps")).severity());
+        assertEquals(Severity.OFF, set.get("hypertrophy").settings(rule("zone-reps")).severity());
+        assertEquals(Severity.OFF, set.get("general-fitness").settings(rule("zone-reps")).severity());
     }
 
     @Test
