@@ -122,9 +122,9 @@ run newline-in-file-name 1 'x.yaml\n' "$r" check .
 r="$work/esc"; mkdir -p "$r"
 prog "Esc" "" | sed 's/rest: 3min/rest: 60s/; s/name: Upper/name: "Up\\e[31mper\\a\\e]0;pwned\\a"/' > "$r/e.yaml"
 run escape-in-session-name 1 '\e' "$r" check .
-# 14. A 1.9 MB exercise id.
+# 14. A 1.9 MB exercise id: ids are at most 80 characters, so one located schema error, at once.
 r="$work/long-id"; mkdir -p "$r"; prog "Long" "" | python3 -c 'import sys; print(sys.stdin.read().replace("barbell-bench-press", "a" * 1900000))' > "$r/l.yaml"
-run long-exercise-id 1 "unknown-exercise" "$r" check .
+run long-exercise-id 1 "must be at most 80 characters" "$r" check .
 # 15. A folder that cannot be walked (a link loop) next to a good programme.
 r="$work/loop"; mkdir -p "$r/p/sub"; cp "$samples/broken/short-rest-compound.yaml" "$r/p/"; ln -s .. "$r/p/sub/up"
 run folder-link-loop 1 "short-rest-compound" "$r" check p
@@ -140,6 +140,18 @@ r="$work/reasons"; mkdir -p "$r"; cp "$samples/broken/constraint-avoid.yaml" "$r
 run constraint-reasons 1 "constraint-avoid" "$r" check . --report sarif=out.sarif --report json=out.json
 reason="$(grep -m1 -A0 'reason:' "$samples/broken/constraint-avoid.yaml" | sed 's/.*reason: *//; s/^"//; s/"$//' | cut -c1-25)"
 if [ -n "$reason" ] && grep -qF "$reason" "$r/out.sarif" "$r/out.json"; then echo "    constraint-reasons: a reason reached SARIF or JSON"; bad=$((bad+1)); fi
+# 19. A damaged result cache: a cached finding's rule id edited in place (checksum not). The run must find it again.
+r="$work/cache"; mkdir -p "$r/programmes"; cp "$samples/broken/short-rest-compound.yaml" "$r/programmes/"
+run cache-first-run 1 "warning short-rest-compound" "$r" check programmes --cache --cache-location cache.json
+sed -i 's/"short-rest-compound"/"short-rest-compounX"/' "$r/cache.json"
+run cache-edited-entry 1 "warning short-rest-compound" "$r" check programmes --cache --cache-location cache.json
+if grep -q 'short-rest-compounX' "$work/cache-edited-entry.out"; then echo "    cache-edited-entry: the edited entry was trusted"; bad=$((bad+1)); fi
+# 20. mesolint's own files among the programmes: checked as what they are, never as programmes, never skipped.
+r="$work/own"; mkdir -p "$r/programmes/rehab"; cp "$samples/broken/short-rest-compound.yaml" "$r/programmes/"
+printf 'profile: club-hypertrophy\nextends: hypertrophy\n' >"$r/programmes/club-profile.yaml"
+printf 'fail-levl: warning\n' >"$r/programmes/rehab/.mesolint.yaml"
+run own-files-in-folder 1 "rehab/.mesolint.yaml:1:1: error schema" "$r" check programmes
+if grep -q "club-profile.yaml:.*missing 'format'" "$work/own-files-in-folder.out"; then echo "    own-files-in-folder: a profile was checked as a programme"; bad=$((bad+1)); fi
 
 echo "cases: $total command runs (+5 file checks); failing: $bad"
 [ "$bad" = 0 ]
