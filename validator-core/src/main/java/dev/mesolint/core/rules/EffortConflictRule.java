@@ -13,6 +13,8 @@ import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.value.Load;
+import dev.mesolint.core.value.LoadUnit;
 import dev.mesolint.core.value.RirRange;
 import dev.mesolint.core.value.Rpe;
 import dev.mesolint.core.rule.RuleParameter;
@@ -152,7 +154,7 @@ public final class EffortConflictRule implements Rule {
                 int reps = (int) Math.max(1, Math.floor(a.repsToFailure().getAsDouble() - reserve));
                 String target = p.reps().max() + " reps"
                         + (reserve > 0 ? " at " + Texts.num(reserve) + " in reserve" : "");
-                yield "load: " + Relations.loadFor(relation, p.reps().max() + reserve) + " for " + target
+                yield "load: " + loadAsWritten(set, relation, p.reps().max() + reserve) + " for " + target
                         + ", or reps: " + reps + " at this load";
             }
             case MISLABELLED -> heavier(context, set, relation)
@@ -165,6 +167,24 @@ public final class EffortConflictRule implements Rule {
                     + p.rir().orElseThrow() + ", or state one of them and remove the other";
             case AGREE, NOT_CHECKED -> throw new IllegalStateException("not a conflict: " + a.status());
         };
+    }
+
+    /**
+     * The load that allows {@code repsToFailure}, in the form the set writes its load: a share of 1RM in 2.5% steps, or
+     * for a weight the same share of the 1RM in force in plate steps (2.5 kg, 5 lb), rounded down, so the fix can be
+     * pasted over the value it replaces.
+     */
+    private static String loadAsWritten(SetMetrics set, OneRepMaxRelation relation, double repsToFailure) {
+        if (set.prescription().load().orElse(null) instanceof Load.Absolute written
+                && set.effort().loadFraction().isPresent() && set.effort().loadFraction().getAsDouble() > 0) {
+            double oneRepMax = written.amount() / set.effort().loadFraction().getAsDouble();
+            double step = written.unit() == LoadUnit.LB ? 5 : 2.5;
+            double weight = Math.floor(Relations.shareFor(relation, repsToFailure) * oneRepMax / step + 1e-9) * step;
+            if (weight >= step) {
+                return new Load.Absolute(weight, written.unit()).toString();
+            }
+        }
+        return Relations.loadFor(relation, repsToFailure);
     }
 
     /** True when the load the stated reserve asks for stays under the athlete's caps and a novice's limit. */

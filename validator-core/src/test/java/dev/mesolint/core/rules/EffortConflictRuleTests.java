@@ -145,6 +145,9 @@ class EffortConflictRuleTests {
         assertEquals(Severity.ERROR, findings.get(0).severity());
         assertTrue(findings.get(0).message().endsWith("above the 100 kg stated for this very session"),
                 findings.get(0).message());
+        // A weight gets a weight as its fix, in plate steps: Brzycki 1993, 5 reps to failure at 32/36 = 88.9% of
+        // 100 kg, rounded down to 87.5 kg; 97.5 kg allows 37 - 36 x 0.975 = 1.9 reps, so 1 at this load.
+        assertEquals("load: 87.5kg for 5 reps, or reps: 1 at this load", findings.get(0).fix());
     }
 
     @Test
