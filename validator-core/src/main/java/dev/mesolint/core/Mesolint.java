@@ -18,7 +18,7 @@ public final class Mesolint {
      * default figures. Bump it (and add a CHANGELOG.md section) whenever any of them changes; RuleSetVersionTests
      * fails until you do.
      */
-    public static final String RULE_SET_VERSION = "2026.12.5";
+    public static final String RULE_SET_VERSION = "2026.12.6";
 
     private static final String VERSION = readVersion();
 

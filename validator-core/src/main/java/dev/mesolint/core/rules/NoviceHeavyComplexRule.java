@@ -3,6 +3,8 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Skill;
 import dev.mesolint.core.finding.Severity;
+import dev.mesolint.core.model.AgreementStatus;
+import dev.mesolint.core.model.EffortSource;
 import dev.mesolint.core.model.OneRepMaxRelation;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
@@ -13,6 +15,7 @@ import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
+import dev.mesolint.core.value.Load;
 import java.util.List;
 
 /** A novice lifting a high-skill exercise at heavy loads. */
@@ -41,6 +44,17 @@ public final class NoviceHeavyComplexRule implements Rule {
         return METADATA;
     }
 
+    /**
+     * A weight the 1RM in force says cannot be lifted for the prescribed reps: the 1RM has risen or is wrong
+     * (effort-conflict reports which), so the load tells nothing about how heavy the set is for the lifter; only a
+     * stated reserve does. A novice's linear progression past the 1RM stated at the start reads this way (common
+     * practice).
+     */
+    private static boolean staleOneRepMax(SetMetrics set) {
+        return set.agreement().status() == AgreementStatus.INFEASIBLE
+                && set.prescription().load().orElse(null) instanceof Load.Absolute;
+    }
+
     @Override
     public void check(RuleContext context) {
         if (context.programme().info().level() != Level.NOVICE) {
@@ -54,11 +68,12 @@ public final class NoviceHeavyComplexRule implements Rule {
                 for (SetMetrics set : session.sets()) {
                     boolean highSkill = context.exercise(set.exerciseId()).map(Exercise::skill)
                             .filter(s -> s == Skill.HIGH).isPresent();
-                    if (!highSkill || !set.effortKnown()) {
+                    boolean stale = staleOneRepMax(set);
+                    if (!highSkill || !set.effortKnown() || stale && set.effortSource() == EffortSource.LOAD) {
                         continue;
                     }
                     double effort = set.reps() + set.rir().getAsDouble();
-                    if (set.agreement().repsToFailure().isPresent()) {
+                    if (!stale && set.agreement().repsToFailure().isPresent()) {
                         effort = Math.min(effort, set.agreement().repsToFailure().getAsDouble());
                     }
                     if (effort <= max) {
