@@ -110,6 +110,20 @@ class CheckChangedTests {
     }
 
     @Test
+    void aChangedTeamProfileKeptOutsideDotMesolintChecksEverything() throws Exception {
+        write("coaching/club.yaml", "profile: harbourside-club\nextends: hypertrophy\n"
+                + "description: The club's defaults.\nrules:\n  short-rest-compound: warning\n");
+        write(".mesolint.yaml", "profile: coaching/club.yaml\n");
+        commit("team profile");
+        write("coaching/club.yaml", "profile: harbourside-club\nextends: hypertrophy\n"
+                + "description: The club's defaults.\nrules:\n  short-rest-compound: error\n");
+        Run run = check("--changed");
+        assertTrue(run.err().contains("coaching/club.yaml changed since"), run.err());
+        assertTrue(run.err().contains("every programme is checked"), run.err());
+        assertTrue(run.out().contains("2 files checked"), run.out());
+    }
+
+    @Test
     void anUnknownRevisionIsAClearUsageError() {
         Run run = check("--changed=no-such-branch");
         assertEquals(2, run.exit());

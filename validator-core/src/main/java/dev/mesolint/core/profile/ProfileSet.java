@@ -176,12 +176,12 @@ public final class ProfileSet {
         return p;
     }
 
-    /** Every profile name: the built-in ones first. */
     /** The team profile files loaded (those named and those they extend), as absolute paths. */
     public Set<Path> files() {
         return nameByFile.keySet();
     }
 
+    /** Every profile name: the built-in ones first. */
     public List<String> names() {
         List<String> names = new ArrayList<>(BuiltInProfiles.NAMES);
         byName.keySet().stream().filter(n -> !names.contains(n)).sorted().forEach(names::add);

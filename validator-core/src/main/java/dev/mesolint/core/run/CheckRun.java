@@ -105,6 +105,9 @@ public final class CheckRun {
             RunRequest.ChangedSince since) throws ConfigProblem {
         Set<Path> configuring = new HashSet<>(workspace.request(List.of()).extraCatalogues());
         workspace.config().file().ifPresent(configuring::add);
+        // A team profile (or one it extends) and the baseline decide findings too, wherever they are kept.
+        configuring.addAll(workspace.profiles().files());
+        workspace.baselineFile().ifPresent(configuring::add);
         return ChangedProgrammes.since(workspace.root(), since.revision(), candidates, configuring);
     }
 
