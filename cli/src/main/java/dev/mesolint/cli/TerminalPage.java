@@ -2,107 +2,113 @@ package dev.mesolint.cli;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import org.commonmark.ext.gfm.tables.TableBlock;
+import org.commonmark.ext.gfm.tables.TableCell;
+import org.commonmark.ext.gfm.tables.TablesExtension;
+import org.commonmark.node.Code;
+import org.commonmark.node.FencedCodeBlock;
+import org.commonmark.node.HardLineBreak;
+import org.commonmark.node.Heading;
+import org.commonmark.node.HtmlBlock;
+import org.commonmark.node.HtmlInline;
+import org.commonmark.node.IndentedCodeBlock;
+import org.commonmark.node.Link;
+import org.commonmark.node.Node;
+import org.commonmark.node.SoftLineBreak;
+import org.commonmark.node.Text;
+import org.commonmark.node.ThematicBreak;
+import org.commonmark.parser.Parser;
 
 /**
- * A rule's reference page (Markdown, written for docs/rules) as text for a terminal: headings underlined, tables as
- * aligned columns, code blocks indented, no markup characters and no comments meant for contributors.
+ * A rule's reference page (CommonMark with tables, written for docs/rules) as text for a terminal: headings
+ * underlined, tables as aligned columns, code blocks indented, no markup characters and no comments meant for
+ * contributors.
  */
 final class TerminalPage {
-    private static final Pattern COMMENT = Pattern.compile("(?s)<!--.*?-->\\n*");
-    private static final Pattern LINK = Pattern.compile("\\[([^\\]]+)]\\(([^)]+)\\)");
-    private static final Pattern STRONG = Pattern.compile("\\*\\*([^*]+)\\*\\*");
-    private static final Pattern EMPHASIS = Pattern.compile("(?<![*\\w])\\*([^*\\s][^*]*)\\*(?![*\\w])");
     private static final String INDENT = "    ";
+    private static final Parser PARSER = Parser.builder().extensions(List.of(TablesExtension.create())).build();
 
     private TerminalPage() {
     }
 
     static String render(String markdown) {
         List<String> out = new ArrayList<>();
-        List<String[]> table = new ArrayList<>();
-        boolean code = false;
-        for (String line : COMMENT.matcher(markdown).replaceAll("").split("\\R", -1)) {
-            if (line.startsWith("```")) {
-                code = !code;
-                continue;
-            }
-            if (code) {
-                out.add(INDENT + line);
-                continue;
-            }
-            if (line.startsWith("|")) {
-                if (!line.matches("\\|[-|: ]+\\|?")) {
-                    table.add(cells(line));
-                }
-                continue;
-            }
-            flush(table, out);
-            if (line.startsWith("# ")) {
-                underline(out, inline(line.substring(2)), '=');
-            } else if (line.startsWith("## ")) {
-                underline(out, inline(line.substring(3)), '-');
-            } else if (line.strip().equals("---")) {
-                out.add("");
-            } else {
-                out.add(inline(line));
-            }
+        for (Node block = PARSER.parse(markdown).getFirstChild(); block != null; block = block.getNext()) {
+            block(block, out);
         }
-        flush(table, out);
         return String.join("\n", out).replaceAll("\\n{3,}", "\n\n").strip() + "\n";
     }
 
-    private static void underline(List<String> out, String heading, char mark) {
-        out.add(heading);
-        out.add(String.valueOf(mark).repeat(heading.length()));
+    private static void block(Node block, List<String> out) {
+        if (block instanceof HtmlBlock) {
+            return; // comments for contributors
+        }
+        if (block instanceof Heading heading && heading.getLevel() <= 2) {
+            String text = inline(heading);
+            out.add(text);
+            out.add(String.valueOf(heading.getLevel() == 1 ? '=' : '-').repeat(text.length()));
+        } else if (block instanceof FencedCodeBlock code) {
+            code.getLiteral().lines().forEach(l -> out.add(INDENT + l));
+        } else if (block instanceof IndentedCodeBlock code) {
+            code.getLiteral().lines().forEach(l -> out.add(INDENT + l));
+        } else if (block instanceof TableBlock table) {
+            table(table, out);
+        } else if (!(block instanceof ThematicBreak)) {
+            out.addAll(inline(block).lines().toList());
+        }
+        out.add("");
     }
 
-    /** A table row's cells; {@code \|} inside a cell is a bar, not a cell boundary. */
-    private static String[] cells(String row) {
-        String inner = row.strip().replaceAll("^\\|", "").replaceAll("\\|$", "");
-        String[] raw = inner.split("(?<!\\\\)\\|", -1);
-        String[] cells = new String[raw.length];
-        for (int i = 0; i < raw.length; i++) {
-            cells[i] = inline(raw[i].strip().replace("\\|", "|"));
-        }
-        return cells;
-    }
-
-    private static void flush(List<String[]> table, List<String> out) {
-        if (table.isEmpty()) {
-            return;
-        }
-        int columns = table.stream().mapToInt(r -> r.length).max().orElse(0);
-        int[] width = new int[columns];
-        for (String[] row : table) {
-            for (int i = 0; i < row.length; i++) {
-                width[i] = Math.max(width[i], row[i].length());
+    /** Every row (header included) as aligned columns, indented. */
+    private static void table(TableBlock table, List<String> out) {
+        List<List<String>> rows = new ArrayList<>();
+        for (Node part = table.getFirstChild(); part != null; part = part.getNext()) {
+            for (Node row = part.getFirstChild(); row != null; row = row.getNext()) {
+                List<String> cells = new ArrayList<>();
+                for (Node cell = row.getFirstChild(); cell != null; cell = cell.getNext()) {
+                    if (cell instanceof TableCell) {
+                        cells.add(inline(cell).strip());
+                    }
+                }
+                rows.add(cells);
             }
         }
-        for (String[] row : table) {
+        int columns = rows.stream().mapToInt(List::size).max().orElse(0);
+        int[] width = new int[columns];
+        rows.forEach(r -> {
+            for (int i = 0; i < r.size(); i++) {
+                width[i] = Math.max(width[i], r.get(i).length());
+            }
+        });
+        for (List<String> row : rows) {
             StringBuilder line = new StringBuilder(INDENT);
-            for (int i = 0; i < row.length; i++) {
-                line.append(i == row.length - 1 ? row[i] : String.format("%-" + width[i] + "s  ", row[i]));
+            for (int i = 0; i < row.size(); i++) {
+                line.append(i == row.size() - 1 ? row.get(i) : String.format("%-" + width[i] + "s  ", row.get(i)));
             }
             out.add(line.toString().stripTrailing());
         }
-        table.clear();
     }
 
-    /** Markup inside a line: code spans, emphasis, and links, which keep their target as a path in the project. */
-    private static String inline(String text) {
-        Matcher link = LINK.matcher(text);
-        StringBuilder linked = new StringBuilder();
-        while (link.find()) {
-            String path = target(link.group(2));
-            // "see [profiles](../profiles.md)" reads "see docs/profiles.md"; other link texts keep their words.
-            boolean named = path.endsWith("/" + link.group(1) + ".md");
-            link.appendReplacement(linked, Matcher.quoteReplacement(named ? path : link.group(1) + " (" + path + ")"));
+    /** A block's text without markup; line breaks as written, links keeping their target as a project path. */
+    private static String inline(Node parent) {
+        StringBuilder text = new StringBuilder();
+        for (Node node = parent.getFirstChild(); node != null; node = node.getNext()) {
+            if (node instanceof Text t) {
+                text.append(t.getLiteral());
+            } else if (node instanceof Code c) {
+                text.append(c.getLiteral());
+            } else if (node instanceof SoftLineBreak || node instanceof HardLineBreak) {
+                text.append('\n');
+            } else if (node instanceof Link link) {
+                String words = inline(link);
+                String path = target(link.getDestination());
+                // "see [profiles](../profiles.md)" reads "see docs/profiles.md"; other link texts keep their words.
+                text.append(path.endsWith("/" + words + ".md") ? path : words + " (" + path + ")");
+            } else if (!(node instanceof HtmlInline)) {
+                text.append(inline(node)); // emphasis, strong emphasis: their words
+            }
         }
-        link.appendTail(linked);
-        String plain = STRONG.matcher(linked.toString().replace("`", "")).replaceAll("$1");
-        return EMPHASIS.matcher(plain).replaceAll("$1");
+        return text.toString();
     }
 
     /** Pages live in docs/rules: {@code ../profiles.md} is docs/profiles.md, {@code x.md} docs/rules/x.md. */

@@ -5,9 +5,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 
 /** SHA-256 of file contents and of text, as lower-case hex. */
 public final class ContentHash {
@@ -15,7 +12,7 @@ public final class ContentHash {
     }
 
     public static String of(byte[] bytes) {
-        return HexFormat.of().formatHex(digest().digest(bytes));
+        return ReadLog.sha256(bytes);
     }
 
     public static String of(String text) {
@@ -27,13 +24,5 @@ public final class ContentHash {
         byte[] bytes = Files.readAllBytes(file);
         ReadLog.record(file, bytes);
         return of(bytes);
-    }
-
-    private static MessageDigest digest() {
-        try {
-            return MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java runtime has SHA-256", e);
-        }
     }
 }

@@ -15,6 +15,7 @@ import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.EnumSet;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -64,7 +65,7 @@ public final class RunStamp {
     public static RunStamp take(String settings, List<Path> searched, Set<Path> skipped) throws IOException {
         StringBuilder text = new StringBuilder("tool ").append(Mesolint.version()).append(' ')
                 .append(Mesolint.RULE_SET_VERSION).append('\n').append("settings ")
-                .append(ReadLog.sha256(settings.getBytes(StandardCharsets.UTF_8))).append('\n');
+                .append(ContentHash.of(settings)).append('\n');
         for (Path start : searched) {
             Path folder = start.toAbsolutePath().normalize();
             text.append("searched ").append(folder).append('\n');
@@ -74,7 +75,7 @@ public final class RunStamp {
                         ".mesolint.yaml"))).append('\n');
             }
         }
-        return new RunStamp(ReadLog.sha256(text.toString().getBytes(StandardCharsets.UTF_8)));
+        return new RunStamp(ContentHash.of(text.toString()));
     }
 
     /**
@@ -91,7 +92,7 @@ public final class RunStamp {
             out.append("log ").append(line.level()).append(' ').append(escape(line.text())).append('\n');
         }
         out.append(failure.map(f -> "failed " + escape(f)).orElse("passed")).append('\n');
-        String checksum = ReadLog.sha256(out.toString().getBytes(StandardCharsets.UTF_8));
+        String checksum = ContentHash.of(out.toString());
         out.append("checksum ").append(checksum).append('\n');
         Files.createDirectories(file.toAbsolutePath().getParent());
         Path temporary = Files.createTempFile(file.toAbsolutePath().getParent(), ".run-stamp", ".tmp");
@@ -147,12 +148,12 @@ public final class RunStamp {
         String last = lines.get(lines.size() - 1);
         StringBuilder before = new StringBuilder();
         lines.subList(0, lines.size() - 1).forEach(l -> before.append(l).append('\n'));
-        return last.equals("checksum " + ReadLog.sha256(before.toString().getBytes(StandardCharsets.UTF_8)));
+        return last.equals("checksum " + ContentHash.of(before.toString()));
     }
 
     private static boolean unchanged(Path file, String hash) {
         try {
-            return ReadLog.sha256(Files.readAllBytes(file)).equals(hash);
+            return ContentHash.of(Files.readAllBytes(file)).equals(hash);
         } catch (IOException | RuntimeException e) {
             return false;
         }
@@ -206,7 +207,7 @@ public final class RunStamp {
     }
 
     private static Set<Path> normalized(Set<Path> paths) {
-        Set<Path> out = new java.util.HashSet<>();
+        Set<Path> out = new HashSet<>();
         paths.forEach(p -> out.add(p.toAbsolutePath().normalize()));
         return out;
     }

@@ -19,6 +19,7 @@ import dev.mesolint.core.review.ReviewRequest;
 import dev.mesolint.core.rule.RuleDefinition;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
@@ -95,7 +96,7 @@ public final class CheckRun {
     private static List<Path> programmes(Workspace workspace, List<Path> inputs) {
         CheckRequest all = workspace.request(inputs);
         ProgrammeFiles.Discovery found = ProgrammeFiles.find(all.root(), all.inputs(), all.ownFiles());
-        List<Path> entries = new java.util.ArrayList<>(found.programmes());
+        List<Path> entries = new ArrayList<>(found.programmes());
         found.refused().forEach(r -> entries.add(r.path()));
         return entries;
     }
@@ -103,10 +104,10 @@ public final class CheckRun {
     /** The {@code candidates} changed since the revision; every one when a configuring file changed. */
     private static ChangedProgrammes.Selection changed(Workspace workspace, List<Path> candidates,
             RunRequest.ChangedSince since) throws ConfigProblem {
-        Set<Path> configuring = new HashSet<>(workspace.request(List.of()).extraCatalogues());
+        // The catalogues and team profiles in effect, the configuration and the baseline decide findings too,
+        // wherever they are kept.
+        Set<Path> configuring = new HashSet<>(workspace.request(List.of()).ownFiles());
         workspace.config().file().ifPresent(configuring::add);
-        // A team profile (or one it extends) and the baseline decide findings too, wherever they are kept.
-        configuring.addAll(workspace.profiles().files());
         workspace.baselineFile().ifPresent(configuring::add);
         return ChangedProgrammes.since(workspace.root(), since.revision(), candidates, configuring);
     }
