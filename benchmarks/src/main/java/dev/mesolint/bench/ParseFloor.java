@@ -43,7 +43,8 @@ public final class ParseFloor {
         System.out.println(files.size() + " files composed, " + nodes.get() + " nodes");
     }
 
-    private static long compose(Path file) {
+    /** Reads and composes one file; package-visible so {@link PhaseCosts} times exactly the floor's work. */
+    static long compose(Path file) {
         LoaderOptions options = new LoaderOptions();
         options.setAllowDuplicateKeys(false);
         Yaml yaml = new Yaml(new SafeConstructor(options));
