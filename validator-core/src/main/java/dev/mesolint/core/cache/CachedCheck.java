@@ -108,12 +108,14 @@ public final class CachedCheck {
             return new Pending(file, shown, false, null, checker.get().checkFile(file), false);
         }
         if (cache.isEmpty()) {
-            return new Pending(file, shown, true, null, checker.get().checkFile(file, content), false);
+            return new Pending(file, shown, true, null, request.keep().apply(checker.get().checkFile(file, content)),
+                    false);
         }
         String hash = ContentHash.of(content);
         Optional<FileReport> cached = cache.get().lookup(shown, hash);
         return cached.map(r -> new Pending(file, shown, true, hash, r, true))
-                .orElseGet(() -> new Pending(file, shown, true, hash, checker.get().checkFile(file, content), false));
+                .orElseGet(() -> new Pending(file, shown, true, hash,
+                        request.keep().apply(checker.get().checkFile(file, content)), false));
     }
 
     private static <T> Supplier<T> lazily(Supplier<T> make) {
