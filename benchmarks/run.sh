@@ -35,10 +35,20 @@ gen "$work/heavy" heavy "$heavy_n"
 gen "$work/large" large
 gen "$work/many" clean "$many_n" "${templates[@]}"
 
-# The same JVM flags for the floor and the check, as the launcher passes them.
+# The check runs as users run it, through the README's launcher (C1 only, the serial collector, and the class-data
+# archive it trains on the bundled samples); the floor gets the same flags and an archive of its own, trained the
+# same way. The rows "without archives" run both as plain JVMs.
 jvm=(java -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto)
-floor_cmd=("${jvm[@]}" -cp "$bench" dev.mesolint.bench.ParseFloor 2)
-check_cmd=("${jvm[@]}" -jar "$cli" check)
+"$here/mesolint" check "$here/sample-programs/programmes" >/dev/null 2>&1 || true # builds the launcher's archive
+floor_archive="$here/benchmarks/target/parse-floor.jsa"
+rm -f "$floor_archive"
+"${jvm[@]}" -XX:ArchiveClassesAtExit="$floor_archive" -Xlog:cds=off -Xlog:cds+dynamic=off -cp "$bench" \
+  dev.mesolint.bench.ParseFloor 2 "${templates[@]}" >/dev/null 2>&1
+floor_cmd=("${jvm[@]}" -XX:SharedArchiveFile="$floor_archive" -Xlog:cds=off -Xlog:cds+dynamic=off -cp "$bench"
+  dev.mesolint.bench.ParseFloor 2)
+check_cmd=("$here/mesolint" check)
+plain_floor_cmd=("${jvm[@]}" -cp "$bench" dev.mesolint.bench.ParseFloor 2)
+plain_check_cmd=("${jvm[@]}" -jar "$cli" check)
 
 tmp="$(mktemp -d)"
 trap 'rm -rf "$tmp"' EXIT
@@ -75,6 +85,19 @@ compare "clean library" "" "$work/clean"
 compare "finding-heavy library" "" "$work/heavy"
 compare "one large programme" "" "$work/large"
 compare "10,000 files" "" "$work/many"
+saved_floor=("${floor_cmd[@]}"); saved_check=("${check_cmd[@]}")
+floor_cmd=("${plain_floor_cmd[@]}"); check_cmd=("${plain_check_cmd[@]}")
+compare "clean, without archives" "" "$work/clean"
+compare "heavy, without archives" "" "$work/heavy"
+floor_cmd=("${saved_floor[@]}"); check_cmd=("${saved_check[@]}")
+
+echo
+echo "per phase, in one JVM on one thread after warm-up (CPU time per file, and as a multiple of the floor)"
+for corpus in clean heavy; do
+  echo "$corpus library:"
+  "${jvm[@]}" -cp "$cli:$here/benchmarks/target/mesolint-benchmarks-$version.jar" dev.mesolint.bench.PhaseCosts \
+    --rounds "$runs" "$work/$corpus" | sed 's/^/  /'
+done
 
 echo
 echo "1 vs 2 processors (clean library; taskset -c 0 for one)"
