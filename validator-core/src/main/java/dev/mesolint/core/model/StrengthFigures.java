@@ -1,7 +1,9 @@
 package dev.mesolint.core.model;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.OptionalDouble;
 
 /**
@@ -28,12 +30,11 @@ final class StrengthFigures {
     }
 
     List<LiftSession> perSession(List<SetMetrics> sets) {
-        List<SessionLift> lifts = new ArrayList<>();
+        Lifts<SessionLift> lifts = new Lifts<>();
         for (SetMetrics set : sets) {
-            SessionLift lift = find(lifts, set.exerciseId());
+            SessionLift lift = lifts.find(set.exerciseId());
             if (lift == null) {
-                lift = new SessionLift(set.exerciseId(), zoneFrom.length);
-                lifts.add(lift);
+                lift = lifts.add(new SessionLift(set.exerciseId(), zoneFrom.length));
             }
             OptionalDouble fraction = set.effort().loadFraction();
             if (fraction.isEmpty()) {
@@ -44,48 +45,29 @@ final class StrengthFigures {
             lift.zoneSets[zone]++;
             lift.zoneReps[zone] += set.reps();
         }
-        LiftSession[] out = new LiftSession[lifts.size()];
+        LiftSession[] out = new LiftSession[lifts.inOrder.size()];
         for (int i = 0; i < out.length; i++) {
-            out[i] = zones(lifts.get(i));
+            out[i] = zones(lifts.inOrder.get(i));
         }
         return List.of(out);
     }
 
     List<LiftWeek> perWeek(int week, List<SessionMetrics> sessions) {
-        List<WeekLift> lifts = new ArrayList<>();
+        Lifts<WeekLift> lifts = new Lifts<>();
         for (SessionMetrics session : sessions) {
             for (SetMetrics set : session.sets()) {
-                WeekLift lift = find(lifts, set.exerciseId());
+                WeekLift lift = lifts.find(set.exerciseId());
                 if (lift == null) {
-                    lift = new WeekLift(set.exerciseId());
-                    lifts.add(lift);
+                    lift = lifts.add(new WeekLift(set.exerciseId()));
                 }
                 lift.add(set, heavyFrom);
             }
         }
-        LiftWeek[] out = new LiftWeek[lifts.size()];
+        LiftWeek[] out = new LiftWeek[lifts.inOrder.size()];
         for (int i = 0; i < out.length; i++) {
-            out[i] = lifts.get(i).toWeek(week);
+            out[i] = lifts.inOrder.get(i).toWeek(week);
         }
         return List.of(out);
-    }
-
-    /**
-     * The lift with this id among the few a session or week does; null when none yet. A lift's sets carry its
-     * catalogue entry's id, one string, so comparing references finds it; equal copies are still matched.
-     */
-    private static <L extends Lift> L find(List<L> lifts, String id) {
-        for (int i = lifts.size() - 1; i >= 0; i--) { // the latest lift first: sets of a lift follow each other
-            if (lifts.get(i).id == id) {
-                return lifts.get(i);
-            }
-        }
-        for (L lift : lifts) {
-            if (lift.id.equals(id)) {
-                return lift;
-            }
-        }
-        return null;
     }
 
     private LiftSession zones(SessionLift lift) {
@@ -103,6 +85,28 @@ final class StrengthFigures {
             }
         }
         return 0;
+    }
+
+    /** Lifts in the order each first appears, found by id; the lift of the set before is tried first. */
+    private static final class Lifts<L extends Lift> {
+        final List<L> inOrder = new ArrayList<>();
+        private final Map<String, L> byId = new HashMap<>();
+        private L last;
+
+        /** The lift with this id; null when none yet. */
+        L find(String id) {
+            if (last == null || !last.id.equals(id)) {
+                last = byId.get(id);
+            }
+            return last;
+        }
+
+        L add(L lift) {
+            inOrder.add(lift);
+            byId.put(lift.id, lift);
+            last = lift;
+            return lift;
+        }
     }
 
     /** A lift's running totals, in the order its sets are done. */
