@@ -28,6 +28,7 @@ public final class FileScope {
     private final Set<Waiver> used = Collections.newSetFromMap(new IdentityHashMap<>());
 
     private final ProgrammeMetrics metrics;
+    private FileIndex index;
 
     public FileScope(String displayPath, Programme programme, Catalogue catalogue, LocatedDocument document,
             String profileName, ProgrammeMetrics metrics) {
@@ -61,6 +62,14 @@ public final class FileScope {
 
     public String profileName() {
         return profileName;
+    }
+
+    /** The lookups rules share in this file, made on first use. */
+    public FileIndex index() {
+        if (index == null) {
+            index = new FileIndex(catalogue, programme.weeks(), metrics.parameters());
+        }
+        return index;
     }
 
     /** The anchor of a finding at {@code location}: this programme's id and the node's logical path. */

@@ -43,7 +43,17 @@ public final class RuleContext {
     }
 
     public Optional<Exercise> exercise(String id) {
-        return file.catalogue().find(id);
+        return Optional.ofNullable(file.index().exercise(id));
+    }
+
+    /** The catalogue entry of {@code id}, or null when there is none: for per-set loops. */
+    public Exercise exerciseOrNull(String id) {
+        return file.index().exercise(id);
+    }
+
+    /** The lookups every rule of this file shares (exercises, prime movers, weeks, rests), made once. */
+    public FileIndex index() {
+        return file.index();
     }
 
     public String profileName() {
