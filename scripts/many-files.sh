@@ -58,6 +58,6 @@ one() {
 }
 one "console"
 one "console + sarif,junit" --report "sarif=$tmp/r.sarif" --report "junit=$tmp/r.xml"
-# The JSON report holds every programme's training figures, so the run keeps them all until it writes it.
+# The JSON report shows every programme's training figures: the run packs them as each file is checked.
 one "console + json" --report "json=$tmp/r.json"
 [ "$bad" = 0 ] || { echo "many-files: $bad run(s) failed" >&2; exit 1; }

@@ -5,6 +5,7 @@ import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
 import java.nio.file.Path;
+import dev.mesolint.core.run.FigureUse;
 import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
@@ -32,13 +33,12 @@ final class CacheOptions {
                     + "folder).")
     Path location;
 
-    /** Why the cache is not used for a run writing {@code reports} and {@code stdout}; empty when it is used. */
-    /** Whether a report of this run shows the training figures, so that each file's report must keep them. */
-    static boolean needFigures(List<ReportTarget> reports, ReportFormat stdout) {
-        return Stream.concat(reports.stream().map(ReportTarget::format), Stream.of(stdout))
-                .anyMatch(RunReports::needsFigures);
+    /** What the run's reports (files and standard output) need of the training figures. */
+    static FigureUse figureUse(List<ReportTarget> reports, ReportFormat stdout) {
+        return FigureUse.of(Stream.concat(reports.stream().map(ReportTarget::format), Stream.of(stdout)).toList());
     }
 
+    /** Why the cache is not used for a run writing {@code reports} and {@code stdout}; empty when it is used. */
     Optional<String> notUsed(List<ReportTarget> reports, ReportFormat stdout) {
         if (!enabled) {
             return Optional.of("off");

@@ -162,7 +162,7 @@ final class CheckCommand implements Callable<Integer> {
             RunOptions runOptions = options.toRunOptions(located, catalogues.files, level,
                     Optional.ofNullable(baseline));
             RunRequest request = RunRequest.of(runOptions, piped.isPresent() ? List.of() : paths)
-                    .withFigures(CacheOptions.needFigures(reports, stdoutFormat));
+                    .withFigures(CacheOptions.figureUse(reports, stdoutFormat));
             if (piped.isPresent()) {
                 request = request.withPiped(new RunRequest.Piped(piped.get().path(), piped.get().content()));
             }
@@ -220,8 +220,7 @@ final class CheckCommand implements Callable<Integer> {
             coach = coach.withSection(new ReviewHtmlSection(new ReviewInput(result.review().get(), installed.rules(),
                     workspace.root(), !noReasons)));
         }
-        ReportInput input = RunReports.input(report, installed.rules(), result.request(), elapsed)
-                .withOptions(wording).withHtml(coach);
+        ReportInput input = result.reportInput(report, elapsed).withOptions(wording).withHtml(coach);
         if (stdoutFormat == ReportFormat.CONSOLE) {
             if (!report.files().isEmpty() || report.missing().isEmpty()) {
                 output.console(showWaived).write(report, cli.getOut());

@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.report.ReportFormat;
 import dev.mesolint.core.report.ReportTarget;
 import dev.mesolint.core.report.RunReports;
+import dev.mesolint.core.run.FigureUse;
 import dev.mesolint.core.run.RunRequest;
 import dev.mesolint.core.run.RunResult;
 import java.io.File;
@@ -209,7 +210,8 @@ abstract class AbstractMesolintMojo extends AbstractMojo {
         RunSettings.Prepared prepared = new RunSettings(basedir.toPath(), programmes, config, profile,
                 reportOnly ? null : failOn, catalogues == null ? List.of() : catalogues, baseline,
                 includes == null ? List.of() : includes, excludes == null ? List.of() : excludes).prepare();
-        RunRequest request = prepared.request().withFigures(figures);
+        RunRequest request = prepared.request().withFigures(
+                FigureUse.of(targets.stream().map(ReportTarget::format).toList()));
         if (useCache() && !figures) {
             request = request.withCache(outputDirectory.toPath().resolve("cache.json"));
         }

@@ -73,8 +73,7 @@ final class CheckExecution {
         try {
             ReportOptions options = ReportOptions.DEFAULTS.withGitAt(result.request().root())
                     .withBaselineInForce(result.baselineInForce()).withIncludeReasons(includeReasons);
-            RunReports.writeAll(RunReports.input(result.report(), prepared.rules(), result.request(), elapsed)
-                    .withOptions(options).withHtml(coachReport(result, targets, showReasons)), targets);
+            RunReports.writeAll(result.reportInput(result.report(), elapsed).withOptions(options).withHtml(coachReport(result, targets, showReasons)), targets);
         } catch (IOException e) {
             throw new MojoExecutionException("mesolint: cannot write the reports to " + folder + ": "
                     + e.getMessage(), e);

@@ -61,7 +61,8 @@ public final class CachedCheck {
         List<FileReport> reports = new ArrayList<>(cache.flatMap(ResultCache::catalogueReports)
                 .orElseGet(() -> checker.get().catalogueReports()));
         int catalogues = reports.size();
-        // Each file is read once, in parallel: its bytes are hashed, and parsed only when the cache has no result.
+        // Each file is read once, in parallel; with a cache, its bytes are hashed and parsed only when the cache has
+        // no result.
         AtomicInteger done = new AtomicInteger();
         AtomicInteger findings = new AtomicInteger();
         List<Pending> pending = files.parallelStream().map(f -> {
@@ -73,7 +74,7 @@ public final class CachedCheck {
         pending.forEach(p -> reports.add(p.report()));
 
         int reused = (int) pending.stream().filter(Pending::reused).count();
-        List<Path> unreadable = pending.stream().filter(p -> p.hash() == null).map(Pending::file).toList();
+        List<Path> unreadable = pending.stream().filter(p -> !p.readable()).map(Pending::file).toList();
         if (cache.isPresent()) {
             ResultCache c = cache.get();
             c.putCatalogueReports(reports.subList(0, catalogues));
@@ -91,8 +92,11 @@ public final class CachedCheck {
         return new Outcome(report, reused, pending.size() - reused, unreadable);
     }
 
-    /** A file's report: its hash (null when unreadable), and whether the report came from the cache. */
-    private record Pending(Path file, String shown, String hash, FileReport report, boolean reused) {
+    /**
+     * A file's report, whether it could be read, its hash (null when unreadable or when no cache is used: hashing
+     * costs a tenth of a check), and whether the report came from the cache.
+     */
+    private record Pending(Path file, String shown, boolean readable, String hash, FileReport report, boolean reused) {
     }
 
     private Pending pending(Path file, Optional<ResultCache> cache, Supplier<Checker> checker) {
@@ -101,12 +105,17 @@ public final class CachedCheck {
         try {
             content = SafeFiles.readRegular(file, request.limits().maxFileBytes());
         } catch (IOException e) {
-            return new Pending(file, shown, null, checker.get().checkFile(file), false);
+            return new Pending(file, shown, false, null, checker.get().checkFile(file), false);
+        }
+        if (cache.isEmpty()) {
+            return new Pending(file, shown, true, null, request.keep().apply(checker.get().checkFile(file, content)),
+                    false);
         }
         String hash = ContentHash.of(content);
-        Optional<FileReport> cached = cache.flatMap(c -> c.lookup(shown, hash));
-        return cached.map(r -> new Pending(file, shown, hash, r, true))
-                .orElseGet(() -> new Pending(file, shown, hash, checker.get().checkFile(file, content), false));
+        Optional<FileReport> cached = cache.get().lookup(shown, hash);
+        return cached.map(r -> new Pending(file, shown, true, hash, r, true))
+                .orElseGet(() -> new Pending(file, shown, true, hash,
+                        request.keep().apply(checker.get().checkFile(file, content)), false));
     }
 
     private static <T> Supplier<T> lazily(Supplier<T> make) {

@@ -4,6 +4,7 @@ import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.yaml.YamlLimits;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.function.UnaryOperator;
 
 /**
  * One run's inputs, shared by the CLI and the Maven plugin.
@@ -12,13 +13,16 @@ import java.util.List;
  * @param extraCatalogues repository catalogue files added to the built-in catalogue
  * @param keepFigures     whether each file's report keeps its training-model figures after its rules ran; only the
  *                        reports that show them (HTML, JSON) need them, and on a large run they are most of the heap
+ * @param keep            what the run holds of each checked file's report until the reports are written: the report
+ *                        as checked, or a smaller form a report chose (the JSON report packs its figures)
  */
 public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<Path> extraCatalogues,
-        RuleConfiguration configuration, YamlLimits limits, boolean keepFigures) {
+        RuleConfiguration configuration, YamlLimits limits, boolean keepFigures, UnaryOperator<FileReport> keep) {
 
     public CheckRequest {
         inputs = List.copyOf(inputs);
         extraCatalogues = List.copyOf(extraCatalogues);
+        java.util.Objects.requireNonNull(keep, "keep");
         if (failOn == Severity.OFF) {
             throw new IllegalArgumentException("fail level must be error, warning or info");
         }
@@ -27,7 +31,7 @@ public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<P
     /** A request whose reports keep their figures. */
     public CheckRequest(List<Path> inputs, Path root, Severity failOn, List<Path> extraCatalogues,
             RuleConfiguration configuration, YamlLimits limits) {
-        this(inputs, root, failOn, extraCatalogues, configuration, limits, true);
+        this(inputs, root, failOn, extraCatalogues, configuration, limits, true, UnaryOperator.identity());
     }
 
     /**
@@ -35,7 +39,12 @@ public record CheckRequest(List<Path> inputs, Path root, Severity failOn, List<P
      * read the figures while the file is checked).
      */
     public CheckRequest keepingFigures(boolean keep) {
-        return new CheckRequest(inputs, root, failOn, extraCatalogues, configuration, limits, keep);
+        return new CheckRequest(inputs, root, failOn, extraCatalogues, configuration, limits, keep, this.keep);
+    }
+
+    /** This request, each checked file's report turned by {@code kept} into what the run holds of it. */
+    public CheckRequest keeping(UnaryOperator<FileReport> kept) {
+        return new CheckRequest(inputs, root, failOn, extraCatalogues, configuration, limits, keepFigures, kept);
     }
 
     /**

@@ -5,6 +5,7 @@ import dev.mesolint.core.catalogue.CatalogueFile;
 import dev.mesolint.core.config.ConfigDocument;
 import dev.mesolint.core.finding.Finding;
 import dev.mesolint.core.finding.FrameworkRules;
+import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.format.CatalogueReader;
 import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.format.ProgrammeBinder;
@@ -12,6 +13,7 @@ import dev.mesolint.core.model.ProgrammeMetrics;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.rule.FileScope;
 import dev.mesolint.core.rule.Rule;
+import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleDefinition;
 import dev.mesolint.core.rule.RuleSettings;
 import dev.mesolint.core.source.Location;
@@ -28,6 +30,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
@@ -44,6 +47,7 @@ public final class Checker {
     private final List<FileReport> catalogueReports;
     private final List<RuleDefinition> rules;
     private final OwnFileCheck ownFiles;
+    private final RuleRunner runner;
 
     public Checker(CheckRequest request, List<RuleDefinition> rules) {
         this.request = request;
@@ -65,6 +69,7 @@ public final class Checker {
         this.catalogue = combined;
         this.catalogueReports = List.copyOf(problems);
         this.ownFiles = new OwnFileCheck(catalogues, this.rules, request.root());
+        this.runner = new RuleRunner(this.rules, request.configuration());
     }
 
     public Catalogue catalogue() {
@@ -184,7 +189,7 @@ public final class Checker {
         ProgrammeMetrics metrics = ProgrammeMetrics.compute(programme, fileCatalogue,
                 request.configuration().modelParameters(profile));
         FileScope scope = new FileScope(shown, programme, fileCatalogue, document, profile, metrics);
-        Map<String, Duration> ruleTimes = new RuleRunner(rules, request.configuration()).run(scope);
+        Map<String, Duration> ruleTimes = runner.run(scope);
         ProgrammeIdentity identity = new ProgrammeIdentity(programme.info().id(), document.valueAt("/programme/id"));
         // The model is kept only for the reports that show it: held for every file to the end of a run, it is what
         // fills the heap (about 25 KB a programme); the identity says the file loaded.
@@ -205,31 +210,50 @@ public final class Checker {
         return new FileReport(shown, Optional.ofNullable(programme), profile, findings, Optional.empty());
     }
 
-    /** Runs the programme rules of one file in a fixed order, then reports unused waivers. */
+    /**
+     * Runs the programme rules of one file in a fixed order, then reports unused waivers. Built once per run: the
+     * rules that are on under a profile, with their settings, are worked out on the profile's first file.
+     */
     private static final class RuleRunner {
+        /** A rule that is on under a profile, with its settings there. */
+        private record Configured(Rule rule, RuleSettings settings) {
+        }
+
         private final List<RuleDefinition> rules;
         private final RuleConfiguration configuration;
+        private final WaiverAudit waiverAudit;
+        private final Map<String, List<Configured>> byProfile = new ConcurrentHashMap<>();
 
         RuleRunner(List<RuleDefinition> rules, RuleConfiguration configuration) {
             this.rules = rules;
             this.configuration = configuration;
+            this.waiverAudit = new WaiverAudit(rules, configuration);
         }
 
         /** Runs the rules; returns the time each took, for reports. */
         Map<String, Duration> run(FileScope scope) {
+            List<Configured> active = byProfile.computeIfAbsent(scope.profileName(), this::active);
             Map<String, Duration> times = new HashMap<>();
+            for (Configured c : active) {
+                long started = System.nanoTime();
+                c.rule().check(new RuleContext(scope, c.rule().metadata(), c.settings()));
+                times.put(c.rule().id(), Duration.ofNanos(System.nanoTime() - started));
+            }
+            waiverAudit.report(scope);
+            return times;
+        }
+
+        private List<Configured> active(String profile) {
+            List<Configured> active = new ArrayList<>();
             for (RuleDefinition definition : rules) {
                 if (definition instanceof Rule rule) {
-                    RuleSettings settings = configuration.settingsFor(scope.profileName(), rule);
-                    if (settings.severity() != dev.mesolint.core.finding.Severity.OFF) {
-                        long started = System.nanoTime();
-                        rule.check(new dev.mesolint.core.rule.RuleContext(scope, rule.metadata(), settings));
-                        times.put(rule.id(), Duration.ofNanos(System.nanoTime() - started));
+                    RuleSettings settings = configuration.settingsFor(profile, rule);
+                    if (settings.severity() != Severity.OFF) {
+                        active.add(new Configured(rule, settings));
                     }
                 }
             }
-            new WaiverAudit(rules, configuration).report(scope);
-            return times;
+            return List.copyOf(active);
         }
     }
 }

@@ -29,7 +29,7 @@ final class TrendCalculator {
             Map<Muscle, Double> change = new EnumMap<>(Muscle.class);
             for (Muscle muscle : musclesIn(current, before)) {
                 double acute = current.hardSets(muscle);
-                double chronic = before.stream().mapToDouble(w -> w.hardSets(muscle)).average().orElse(0);
+                double chronic = meanHardSets(before, muscle);
                 if (chronic > 0) {
                     acuteChronic.put(muscle, acute / chronic);
                 }
@@ -41,6 +41,21 @@ final class TrendCalculator {
             result.add(current.withTrends(acuteChronic, change));
         }
         return List.copyOf(result);
+    }
+
+    /**
+     * The mean of the weeks' hard sets; 0 for no weeks. Hard sets are sums of credits 1 and 0.5, exact in binary,
+     * so a plain sum gives what a compensated stream sum gives, without a stream per week and muscle.
+     */
+    private static double meanHardSets(List<WeekMetrics> weeks, Muscle muscle) {
+        if (weeks.isEmpty()) {
+            return 0;
+        }
+        double sum = 0;
+        for (WeekMetrics week : weeks) {
+            sum += week.hardSets(muscle);
+        }
+        return sum / weeks.size();
     }
 
     private static Set<Muscle> musclesIn(WeekMetrics current, List<WeekMetrics> before) {

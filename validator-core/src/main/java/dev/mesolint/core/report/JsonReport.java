@@ -47,16 +47,34 @@ public final class JsonReport implements ReportWriter {
                 .filter(f -> !f.waived()).filter(Finding::baselined).count());
         ArrayNode missing = doc.putArray("missing");
         run.missing().forEach(missing::add);
-        ArrayNode files = doc.putArray("files");
-        ArrayNode metrics = JsonText.array();
-        for (FileReport file : run.files()) {
-            files.add(file(input, file));
-            input.figures().of(file).ifPresent(f -> metrics.add(metrics(f)));
+        // Both lists are streamed: each entry is made, written and dropped, so a large run never holds them all.
+        doc.putArray("files");
+        Map<String, java.util.Iterator<ObjectNode>> streamed = new java.util.LinkedHashMap<>();
+        streamed.put("files", run.files().stream().map(file -> file(input, file)).iterator());
+        if (run.files().stream().anyMatch(file -> hasMetrics(input, file))) {
+            doc.putArray("metrics");
+            streamed.put("metrics", run.files().stream().map(file -> metrics(input, file)).flatMap(Optional::stream)
+                    .iterator());
         }
-        if (!metrics.isEmpty()) {
-            doc.set("metrics", metrics);
-        }
-        JsonText.write(doc, out);
+        JsonText.write(doc, doc, streamed, out);
+    }
+
+    private static boolean hasMetrics(ReportInput input, FileReport file) {
+        return input.figures() instanceof PackedFigures packed ? packed.hasMetrics(file)
+                : input.figures().of(file).isPresent();
+    }
+
+    private static Optional<ObjectNode> metrics(ReportInput input, FileReport file) {
+        return input.figures() instanceof PackedFigures packed ? packed.metrics(file)
+                : input.figures().of(file).map(JsonReport::metrics);
+    }
+
+    /** The {@code programme} object of a file entry: the programme's id and title. */
+    static ObjectNode programme(dev.mesolint.core.programme.Programme p) {
+        ObjectNode programme = JsonText.object();
+        programme.put("id", p.info().id());
+        Optional.ofNullable(p.info().title()).ifPresent(t -> programme.put("title", t));
+        return programme;
     }
 
     private static ObjectNode file(ReportInput input, FileReport file) {
@@ -64,11 +82,9 @@ public final class JsonReport implements ReportWriter {
         node.put("path", file.displayPath());
         node.put("loaded", file.loaded());
         node.put("profile", file.profile());
-        file.programme().ifPresent(p -> {
-            ObjectNode programme = node.putObject("programme");
-            programme.put("id", p.info().id());
-            Optional.ofNullable(p.info().title()).ifPresent(t -> programme.put("title", t));
-        });
+        Optional<ObjectNode> programme = input.figures() instanceof PackedFigures packed ? packed.programme(file)
+                : file.programme().map(JsonReport::programme);
+        programme.ifPresent(p -> node.set("programme", p));
         ArrayNode findings = node.putArray("findings");
         file.findings().stream().filter(f -> f.severity() != Severity.OFF)
                 .forEach(f -> findings.add(finding(input, f)));

@@ -2,7 +2,6 @@ package dev.mesolint.core.report;
 
 import java.io.IOException;
 import java.io.Writer;
-import java.util.Collections;
 import java.util.Iterator;
 import java.util.Map;
 import tools.jackson.core.JacksonException;
@@ -17,6 +16,7 @@ import tools.jackson.databind.node.ObjectNode;
 /** Builds and prints the JSON trees of the JSON and SARIF reports (the mapper is immutable and thread-safe). */
 final class JsonText {
     private static final JsonMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    private static final JsonMapper COMPACT = JsonMapper.builder().build();
 
     private JsonText() {
     }
@@ -31,7 +31,7 @@ final class JsonText {
 
     /** Writes the tree, indented, followed by a newline; does not close {@code out}. */
     static void write(JsonNode tree, Writer out) throws IOException {
-        write(tree, null, null, Collections.emptyIterator(), out);
+        write(tree, null, Map.of(), out);
     }
 
     /**
@@ -42,8 +42,14 @@ final class JsonText {
      */
     static void write(JsonNode tree, ObjectNode holder, String field, Iterator<? extends JsonNode> items, Writer out)
             throws IOException {
+        write(tree, holder, Map.of(field, items), out);
+    }
+
+    /** As {@link #write(JsonNode, ObjectNode, String, Iterator, Writer)}, streaming several arrays of {@code holder}. */
+    static void write(JsonNode tree, ObjectNode holder, Map<String, ? extends Iterator<? extends JsonNode>> streamed,
+            Writer out) throws IOException {
         try (JsonGenerator gen = MAPPER.createGenerator(new NonClosing(out))) {
-            node(gen, tree, holder, field, items);
+            node(gen, tree, holder, streamed);
         } catch (JacksonException e) {
             throw new IOException(e.getOriginalMessage(), e);
         }
@@ -51,32 +57,43 @@ final class JsonText {
         out.flush();
     }
 
-    private static void node(JsonGenerator gen, JsonNode node, ObjectNode holder, String field,
-            Iterator<? extends JsonNode> items) {
+    private static void node(JsonGenerator gen, JsonNode node, ObjectNode holder,
+            Map<String, ? extends Iterator<? extends JsonNode>> streamed) {
         if (node.isObject()) {
             gen.writeStartObject();
             for (Map.Entry<String, JsonNode> e : node.properties()) {
                 gen.writeName(e.getKey());
-                if (node == holder && e.getKey().equals(field)) {
+                Iterator<? extends JsonNode> items = node == holder ? streamed.get(e.getKey()) : null;
+                if (items != null) {
                     gen.writeStartArray();
                     while (items.hasNext()) {
                         MAPPER.writeTree(gen, items.next());
                     }
                     gen.writeEndArray();
                 } else {
-                    node(gen, e.getValue(), holder, field, items);
+                    node(gen, e.getValue(), holder, streamed);
                 }
             }
             gen.writeEndObject();
         } else if (node.isArray()) {
             gen.writeStartArray();
             for (JsonNode element : node) {
-                node(gen, element, holder, field, items);
+                node(gen, element, holder, streamed);
             }
             gen.writeEndArray();
         } else {
             MAPPER.writeTree(gen, node);
         }
+    }
+
+    /** The tree as compact UTF-8 JSON, for holding it packed ({@link #parse} reads it back as it was). */
+    static byte[] compact(JsonNode tree) {
+        return COMPACT.writeValueAsBytes(tree);
+    }
+
+    /** A tree written by {@link #compact}. */
+    static JsonNode parse(byte[] json) {
+        return COMPACT.readTree(json);
     }
 
     /** The caller's writer, left open when the generator closes (the caller may write more, and closes it). */

@@ -3,9 +3,9 @@ package dev.mesolint.core.rules;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.model.RestGap;
-import dev.mesolint.core.model.SessionRests;
 import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.programme.WorkItem;
@@ -13,11 +13,11 @@ import dev.mesolint.core.rule.Edits;
 import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.source.Location;
-import java.util.Optional;
+import dev.mesolint.core.value.Durations;
 import java.util.function.BiFunction;
 
 /**
- * The check the two rest rules share: every rest the model's session plan gives ({@link SessionRests}) against the
+ * The check the two rest rules share: every rest the model's session plan gives (planned once per file by the rule framework) against the
  * limit a rule sets. A rest the programme does not write is unknown and never reported.
  */
 final class RestCheck {
@@ -36,10 +36,16 @@ final class RestCheck {
         Occurrences found = new Occurrences();
         for (Week week : context.programme().weeks()) {
             for (Session session : week.sessions()) {
-                for (RestGap gap : SessionRests.of(session, context.metrics().parameters())) {
-                    Optional<Exercise> exercise = context.exercise(gap.work().exerciseId());
-                    Limit limit = exercise.map(e -> limitFor.apply(gap.work(), e)).orElse(null);
-                    if (limit == null || gap.seconds().isEmpty()) {
+                if (!mayRestTooShort(context, session, limitFor)) {
+                    continue;
+                }
+                for (RestGap gap : context.index().rests(session)) {
+                    if (gap.seconds().isEmpty()) {
+                        continue;
+                    }
+                    Exercise exercise = context.exerciseOrNull(gap.work().exerciseId());
+                    Limit limit = exercise == null ? null : limitFor.apply(gap.work(), exercise);
+                    if (limit == null) {
                         continue;
                     }
                     double rest = gap.seconds().getAsDouble();
@@ -51,6 +57,44 @@ final class RestCheck {
             }
         }
         found.report(context);
+    }
+
+    /**
+     * False when no rest of the session can be under its limit, so the session need not be planned. A rest is judged
+     * only where it is written, and is never shorter than what is written: a straight set's rest is its own
+     * {@code rest}; a superset round's is the superset's {@code rest} plus the changeovers between its items.
+     */
+    private static boolean mayRestTooShort(RuleContext context, Session session,
+            BiFunction<ExerciseWork, Exercise, Limit> limitFor) {
+        for (WorkItem item : session.work()) {
+            if (item instanceof Superset superset) {
+                if (superset.rest().isPresent()) {
+                    double rest = Durations.seconds(superset.rest().get());
+                    for (ExerciseWork work : superset.items()) {
+                        if (rest < limit(context, work, limitFor)) {
+                            return true;
+                        }
+                    }
+                }
+            } else {
+                ExerciseWork work = (ExerciseWork) item;
+                double limit = limit(context, work, limitFor);
+                for (SetPrescription set : work.sets()) {
+                    if (set.rest().isPresent() && Durations.seconds(set.rest().get()) < limit) {
+                        return true;
+                    }
+                }
+            }
+        }
+        return false;
+    }
+
+    /** The shortest rest the rule allows after the entry's sets, in seconds; 0 when the entry is not the rule's. */
+    private static double limit(RuleContext context, ExerciseWork work,
+            BiFunction<ExerciseWork, Exercise, Limit> limitFor) {
+        Exercise exercise = context.exerciseOrNull(work.exerciseId());
+        Limit limit = exercise == null ? null : limitFor.apply(work, exercise);
+        return limit == null ? 0 : context.param(limit.parameter());
     }
 
     private static void report(RuleContext context, Occurrences found, Week week, Session session, RestGap gap,

@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
@@ -34,6 +35,7 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     public static final String ID = "weekly-volume-min";
     static final String MIN_SETS = "min-sets";
     static final String MAX_RIR = "max-rir";
+    private static final int MUSCLES = Muscle.values().length;
 
     private static final RuleMetadata METADATA = new RuleMetadata(ID,
             "A muscle the programme trains directly (a prime mover of one of its exercises) gets at least "
@@ -94,23 +96,35 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
     public void check(RuleContext context) {
         double min = context.param(MIN_SETS);
         double maxRir = context.param(MAX_RIR);
+        Map<Muscle, String> trained = context.metrics().directlyTrained();
+        if (trained.isEmpty()) {
+            return;
+        }
+        List<WeekMetrics> weeks = context.metrics().weeks();
+        List<Counted> counts = new ArrayList<>(weeks.size());
+        for (WeekMetrics week : weeks) {
+            counts.add(counted(context, week, maxRir));
+        }
         Occurrences found = new Occurrences();
-        context.metrics().directlyTrained().forEach((muscle, exercise) -> {
+        trained.forEach((muscle, exercise) -> {
             // Weeks short of the floor, split by the waivers written on each week, so a waiver keeps to its week.
             Map<List<Waiver>, TreeMap<Integer, Double>> shortWeeks = new LinkedHashMap<>();
-            boolean[] strength = {false};
-            for (WeekMetrics week : context.metrics().weeks()) {
-                double sets = counted(context, week, muscle, maxRir, false);
-                double strengthSets = counted(context, week, muscle, maxRir, true);
-                strength[0] |= strengthSets > 0;
+            boolean strength = false;
+            for (int i = 0; i < weeks.size(); i++) {
+                WeekMetrics week = weeks.get(i);
+                double sets = counts.get(i).close[muscle.ordinal()];
+                double strengthSets = counts.get(i).strength[muscle.ordinal()];
+                strength |= strengthSets > 0;
                 sets += strengthSets;
                 if (!week.deload() && sets < min) {
-                    List<Waiver> waivers = Places.week(context, week.number()).map(Week::waivers).orElse(List.of());
+                    Week written = context.index().week(week.number());
+                    List<Waiver> waivers = written == null ? List.of() : written.waivers();
                     shortWeeks.computeIfAbsent(waivers, w -> new TreeMap<>()).put(week.number(), sets);
                 }
             }
-            shortWeeks.forEach((waivers, weeks) -> add(context, found, muscle, exercise, waivers, weeks, min,
-                    maxRir, strength[0]));
+            boolean anyStrength = strength;
+            shortWeeks.forEach((waivers, weeksShort) -> add(context, found, muscle, exercise, waivers, weeksShort, min,
+                    maxRir, anyStrength));
         });
         found.report(context);
     }
@@ -147,22 +161,32 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
         return written.map(Week::location).orElseGet(() -> context.metrics().week(number).orElseThrow().location());
     }
 
+    /** One week's credited sets per muscle (by ordinal): those close to failure, and the strength sets besides. */
+    private record Counted(double[] close, double[] strength) {
+    }
+
     /**
-     * Credited sets for {@code muscle} (1 a prime-mover set, 0.5 a synergist set, the way the model credits hard
-     * sets): with {@code strength} false those leaving at most {@code maxRir} in reserve (sets of unknown effort do
-     * not count); with it true the others that are strength-purpose or ballistic.
+     * Credited sets per muscle (1 a prime-mover set, 0.5 a synergist set, the way the model credits hard sets), in
+     * one walk of the week: {@code close} those leaving at most {@code maxRir} in reserve (sets of unknown effort do
+     * not count); {@code strength} the others that are strength-purpose or ballistic.
      */
-    private static double counted(RuleContext context, WeekMetrics week, Muscle muscle, double maxRir,
-            boolean strength) {
-        double sets = 0;
+    private static Counted counted(RuleContext context, WeekMetrics week, double maxRir) {
+        Counted counted = new Counted(new double[MUSCLES], new double[MUSCLES]);
         for (SessionMetrics session : week.sessions()) {
             for (SetMetrics set : session.sets()) {
+                Exercise exercise = context.exerciseOrNull(set.exerciseId());
+                if (exercise == null) {
+                    continue;
+                }
                 boolean close = set.effortKnown() && set.rir().getAsDouble() <= maxRir;
-                if (strength ? !close && StrengthSets.notJudged(context, set) : close) {
-                    sets += context.exercise(set.exerciseId()).map(e -> e.credit(muscle)).orElse(0.0);
+                double[] into = close ? counted.close : StrengthSets.notJudged(context, set) ? counted.strength : null;
+                if (into != null) {
+                    for (Map.Entry<Muscle, Double> credit : exercise.muscles().entrySet()) {
+                        into[credit.getKey().ordinal()] += credit.getValue();
+                    }
                 }
             }
         }
-        return sets;
+        return counted;
     }
 }

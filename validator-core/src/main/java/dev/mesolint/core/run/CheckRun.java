@@ -11,6 +11,9 @@ import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.report.ModelFigures;
+import dev.mesolint.core.report.PackedFigures;
+import dev.mesolint.core.report.ReportFigures;
 import dev.mesolint.core.review.ChangeReview;
 import dev.mesolint.core.review.ChangedProgrammes;
 import dev.mesolint.core.review.NewSinceGate;
@@ -50,10 +53,16 @@ public final class CheckRun {
             inputs = selection.get().programmes();
         }
         CheckRequest checks = workspace.request(inputs).keepingFigures(request.keepFigures());
+        ReportFigures figures = ModelFigures.underProfiles(checks.configuration(), rules);
+        if (request.figures() == FigureUse.JSON) {
+            PackedFigures packed = PackedFigures.underProfiles(checks.configuration(), rules);
+            checks = checks.keeping(packed::pack);
+            figures = packed;
+        }
         if (selection.isPresent() && inputs.isEmpty()) {
             RunReport none = new RunReport(List.of(), checks.failOn(), List.of());
             return new RunResult(workspace, checks, rules, none, List.of(), RunResult.CacheUse.NONE, selection,
-                    candidates, Optional.empty());
+                    candidates, Optional.empty(), figures);
         }
         RunReport report;
         List<Path> unreadable = List.of();
@@ -86,7 +95,8 @@ public final class CheckRun {
             report = new NewSinceGate(rules).apply(report, r);
             review = Optional.of(r);
         }
-        return new RunResult(workspace, checks, rules, report, unreadable, cache, selection, candidates, review);
+        return new RunResult(workspace, checks, rules, report, unreadable, cache, selection, candidates, review,
+                figures);
     }
 
     /**

@@ -18,12 +18,12 @@ import java.util.Optional;
  * @param changedSince  check only the programmes changed since a git revision
  * @param newSince      count only the findings new since a git revision (the safety policy still applies)
  * @param progress      told after each programme file
- * @param keepFigures   whether each file's report keeps its training figures (only reports that show them need
- *                      them; findings are the same either way)
+ * @param figures       which reports show the training figures, and so what each file keeps of its model
+ *                      (findings are the same either way)
  */
 public record RunRequest(RunOptions options, List<Path> inputs, Optional<Piped> piped, Optional<Path> cacheFile,
         boolean applyBaseline, Optional<ChangedSince> changedSince, Optional<String> newSince, RunProgress progress,
-        boolean keepFigures) {
+        FigureUse figures) {
 
     /** A programme read by the front end, and the path it stands for. */
     public record Piped(Path path, byte[] content) {
@@ -43,42 +43,52 @@ public record RunRequest(RunOptions options, List<Path> inputs, Optional<Piped> 
      */
     public static RunRequest of(RunOptions options, List<Path> inputs) {
         return new RunRequest(options, inputs, Optional.empty(), Optional.empty(), true, Optional.empty(),
-                Optional.empty(), RunProgress.NONE, true);
+                Optional.empty(), RunProgress.NONE, FigureUse.ALL);
     }
 
-    /** The same run, its file reports keeping the training figures only when {@code keep}. */
+    /** Whether each file's report keeps its training figures, in any form. */
+    public boolean keepFigures() {
+        return figures != FigureUse.NONE;
+    }
+
+    /** The same run, its file reports keeping the whole model when {@code keep}, nothing of it otherwise. */
     public RunRequest withFigures(boolean keep) {
+        return withFigures(keep ? FigureUse.ALL : FigureUse.NONE);
+    }
+
+    /** The same run, its file reports keeping what {@code use} needs of the training figures. */
+    public RunRequest withFigures(FigureUse use) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, newSince, progress,
-                keep);
+                use);
     }
 
     public RunRequest withPiped(Piped document) {
         return new RunRequest(options, List.of(), Optional.of(document), cacheFile, applyBaseline, changedSince,
-                newSince, progress, keepFigures);
+                newSince, progress, figures);
     }
 
     public RunRequest withCache(Path file) {
         return new RunRequest(options, inputs, piped, Optional.of(file), applyBaseline, changedSince, newSince,
-                progress, keepFigures);
+                progress, figures);
     }
 
     /** Every finding counts, the configuration's baseline too is left alone (and findings are recorded as found). */
     public RunRequest withoutBaseline() {
-        return new RunRequest(options, inputs, piped, cacheFile, false, changedSince, newSince, progress, keepFigures);
+        return new RunRequest(options, inputs, piped, cacheFile, false, changedSince, newSince, progress, figures);
     }
 
     public RunRequest withChangedSince(ChangedSince since) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, Optional.of(since), newSince,
-                progress, keepFigures);
+                progress, figures);
     }
 
     public RunRequest withNewSince(String revision) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, Optional.of(revision),
-                progress, keepFigures);
+                progress, figures);
     }
 
     public RunRequest withProgress(RunProgress listener) {
         return new RunRequest(options, inputs, piped, cacheFile, applyBaseline, changedSince, newSince, listener,
-                keepFigures);
+                figures);
     }
 }

@@ -9,7 +9,11 @@ import dev.mesolint.core.engine.Workspace;
 import dev.mesolint.core.review.ChangedProgrammes;
 import dev.mesolint.core.review.Review;
 import dev.mesolint.core.rule.RuleDefinition;
+import dev.mesolint.core.report.ReportFigures;
+import dev.mesolint.core.report.ReportInput;
+import dev.mesolint.core.report.RunReports;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.List;
 import java.util.Optional;
 
@@ -41,10 +45,11 @@ public final class RunResult {
     private final Optional<ChangedProgrammes.Selection> selection;
     private final int candidates;
     private final Optional<Review> review;
+    private final ReportFigures figures;
 
     RunResult(Workspace workspace, CheckRequest request, List<RuleDefinition> rules, RunReport report,
             List<Path> unreadable, CacheUse cache, Optional<ChangedProgrammes.Selection> selection, int candidates,
-            Optional<Review> review) {
+            Optional<Review> review, ReportFigures figures) {
         this.workspace = workspace;
         this.request = request;
         this.rules = List.copyOf(rules);
@@ -54,6 +59,7 @@ public final class RunResult {
         this.selection = selection;
         this.candidates = candidates;
         this.review = review;
+        this.figures = figures;
     }
 
     public Workspace workspace() {
@@ -95,6 +101,14 @@ public final class RunResult {
     }
 
     /** The comparison with the new-since revision, when one was asked for. */
+    /**
+     * The input for every report of this run (its own findings replaced by {@code shown}, the baseline or gate
+     * applied by the caller), with the figures this run kept: packed ones when only a JSON report shows them.
+     */
+    public ReportInput reportInput(RunReport shown, Duration elapsed) {
+        return RunReports.input(shown, rules, request, elapsed).withFigures(figures);
+    }
+
     public Optional<Review> review() {
         return review;
     }

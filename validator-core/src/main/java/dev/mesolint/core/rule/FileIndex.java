@@ -1,0 +1,80 @@
+package dev.mesolint.core.rule;
+
+import dev.mesolint.core.catalogue.Catalogue;
+import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.model.ModelParameters;
+import dev.mesolint.core.model.RestGap;
+import dev.mesolint.core.model.SessionRests;
+import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.Week;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * What several rules look up in one file, worked out once and shared: the exercise entries the programme names, each
+ * entry's prime movers, the written weeks by number and each session's rests. Filled on first use, so a rule that
+ * asks nothing costs nothing. Confined to the thread that checks the file.
+ */
+public final class FileIndex {
+    private static final List<Muscle> NO_MUSCLES = List.of();
+
+    private final Catalogue catalogue;
+    private final List<Week> weeks;
+    private final ModelParameters parameters;
+    private final Map<String, Exercise> exercises = new HashMap<>();
+    private final Map<Exercise, List<Muscle>> primeMovers = new IdentityHashMap<>();
+    private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
+    private Map<Integer, Week> weeksByNumber;
+
+    FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters) {
+        this.catalogue = catalogue;
+        this.weeks = weeks;
+        this.parameters = parameters;
+    }
+
+    /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */
+    public Exercise exercise(String id) {
+        Exercise found = exercises.get(id);
+        if (found == null && !exercises.containsKey(id)) {
+            found = catalogue.find(id).orElse(null);
+            exercises.put(id, found);
+        }
+        return found;
+    }
+
+    /** The muscles {@code exercise} credits as prime mover (credit 1 or more), in the order the entry writes them. */
+    public List<Muscle> primeMovers(Exercise exercise) {
+        List<Muscle> movers = primeMovers.get(exercise);
+        if (movers == null) {
+            List<Muscle> found = new ArrayList<>();
+            for (Map.Entry<Muscle, Double> e : exercise.muscles().entrySet()) {
+                if (e.getValue() >= Exercise.PRIME_MOVER) {
+                    found.add(e.getKey());
+                }
+            }
+            movers = found.isEmpty() ? NO_MUSCLES : List.copyOf(found);
+            primeMovers.put(exercise, movers);
+        }
+        return movers;
+    }
+
+    /** The first written week numbered {@code number}; null when the programme writes none. */
+    public Week week(int number) {
+        if (weeksByNumber == null) {
+            weeksByNumber = new HashMap<>();
+            for (Week w : weeks) {
+                weeksByNumber.putIfAbsent(w.number(), w);
+            }
+        }
+        return weeksByNumber.get(number);
+    }
+
+    /** The rests of {@code session} that more work follows ({@link SessionRests}), planned once for every rule. */
+    public List<RestGap> rests(Session session) {
+        return rests.computeIfAbsent(session, s -> SessionRests.of(s, parameters));
+    }
+}
