@@ -56,11 +56,10 @@ final class BindContext {
         if (node == null || node.isNull()) {
             return Optional.empty();
         }
-        String child = Pointers.child(pointer, key);
         try {
             return Optional.of(parser.parse(node.asString()));
         } catch (InvalidValueException e) {
-            reject(child, e);
+            reject(Pointers.child(pointer, key), e);
             return Optional.empty();
         }
     }

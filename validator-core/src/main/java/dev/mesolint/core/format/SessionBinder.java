@@ -86,9 +86,10 @@ final class SessionBinder {
             }
         } else {
             int count = setsNode == null ? 1 : setsNode.asInt();
+            SetDefaults beforeLast = defaults.beforeLastSet();
             for (int i = 1; i <= count; i++) {
                 // A technique, and the "as many as possible" of 5+, written on the entry belong to its last set.
-                SetDefaults forSet = i == count ? defaults : defaults.beforeLastSet();
+                SetDefaults forSet = i == count ? defaults : beforeLast;
                 sets.add(forSet.toSet(i, at, waivers, ctx, pointer));
             }
         }
@@ -110,8 +111,9 @@ final class SessionBinder {
             SetDefaults defaults = defaults(item, itemPointer);
             Location itemAt = ctx.at(list, i, itemPointer);
             List<SetPrescription> sets = new ArrayList<>();
+            SetDefaults beforeLast = defaults.beforeLastSet();
             for (int round = 1; round <= rounds; round++) {
-                SetDefaults forRound = round == rounds ? defaults : defaults.beforeLastSet();
+                SetDefaults forRound = round == rounds ? defaults : beforeLast;
                 sets.add(forRound.toSet(round, itemAt, itemWaivers, ctx, itemPointer));
             }
             items.add(new ExerciseWork(item.get("exercise").asString(), 0, sets, itemAt,
@@ -154,7 +156,7 @@ final class SessionBinder {
                 ctx.value(node, pointer, "tempo", Tempo::parse),
                 Optional.ofNullable(BindContext.text(node, "technique"))
                         .map(t -> CatalogueEntryBinder.named(Technique.class, t)), test, amounts > 0,
-                written);
+                Map.copyOf(written));
     }
 
     /** Values written on an exercise entry that its sets inherit unless a set overrides them. */
@@ -176,6 +178,7 @@ final class SessionBinder {
                 AMOUNT_KEYS.forEach(places::remove);
             }
             places.putAll(set.written);
+            places = Map.copyOf(places);
             return new SetDefaults(setStatesAmount ? set.reps : reps, setStatesAmount ? set.hold : hold,
                     setStatesAmount ? set.distance : distance,
                     setStatesEffort ? set.rir : rir, setStatesEffort ? set.rpe : rpe,
@@ -191,9 +194,12 @@ final class SessionBinder {
         }
 
         private Map<String, Location> withoutTechnique() {
+            if (!written.containsKey("technique")) {
+                return written;
+            }
             Map<String, Location> places = new HashMap<>(written);
             places.remove("technique");
-            return places;
+            return Map.copyOf(places);
         }
 
         SetPrescription toSet(int number, Location location, List<Waiver> waivers,
