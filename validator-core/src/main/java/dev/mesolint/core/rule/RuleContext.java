@@ -135,7 +135,7 @@ public final class RuleContext {
             return set.placeOf(key);
         }
         String candidate = Pointers.child(subject.location().pointer(), key);
-        Location l = file.document().values().get(candidate);
+        Location l = file.document().writtenAt(candidate);
         return l == null ? subject.location() : l.withPointer(candidate);
     }
 }
