@@ -13,18 +13,25 @@ final class FatigueState {
     /** Below this, fatigue is dropped: it keeps reports free of 1e-12 residues. */
     private static final double NEGLIGIBLE = 1e-9;
 
-    /** The recovery time constant of each muscle, by ordinal. */
-    private final double[] tau = new double[MUSCLES.length];
+    /** The recovery time constant of each muscle, by ordinal (shared, never changed). */
+    private final double[] tau;
     /** 0 for a muscle without a level. */
     private final double[] level = new double[MUSCLES.length];
     /** Which muscles carry a level (one may carry 0 after a bout that credits it nothing), one bit per ordinal. */
     private long present;
 
-    /** A fresh state: no fatigue anywhere. */
-    FatigueState(FatigueModel model) {
+    /** A fresh state, no fatigue anywhere, recovering with the time constants {@link #timeConstants} gave. */
+    FatigueState(double[] timeConstants) {
+        this.tau = timeConstants;
+    }
+
+    /** The model's recovery time constant of each muscle, by ordinal: one array for every session. */
+    static double[] timeConstants(FatigueModel model) {
+        double[] tau = new double[MUSCLES.length];
         for (Muscle muscle : MUSCLES) {
             tau[muscle.ordinal()] = model.recoveryTimeConstantSeconds(muscle);
         }
+        return tau;
     }
 
     /** The levels now, muscles with none left out. */

@@ -55,22 +55,16 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
 
     private static Map<Muscle, String> directlyTrained(List<WeekMetrics> weeks, ExerciseTable exercises) {
         Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
-        String previous = null;
+        // A week's lifts are its sets' exercises in the order each first appears, so reading them in week order
+        // meets every exercise first where its first set is.
         for (WeekMetrics week : weeks) {
-            for (SessionMetrics session : week.sessions()) {
-                for (SetMetrics set : session.sets()) {
-                    // a set of the exercise just seen adds nothing: the first exercise per muscle is kept
-                    if (set.exerciseId().equals(previous)) {
-                        continue;
-                    }
-                    previous = set.exerciseId();
-                    ExerciseFigures exercise = exercises.find(previous);
-                    if (exercise == null) {
-                        continue;
-                    }
-                    for (Muscle muscle : exercise.primeMovers) {
-                        direct.putIfAbsent(muscle, exercise.exercise.id());
-                    }
+            for (LiftWeek lift : week.lifts()) {
+                ExerciseFigures exercise = exercises.find(lift.exerciseId());
+                if (exercise == null) {
+                    continue;
+                }
+                for (Muscle muscle : exercise.primeMovers) {
+                    direct.putIfAbsent(muscle, exercise.exercise.id());
                 }
             }
         }

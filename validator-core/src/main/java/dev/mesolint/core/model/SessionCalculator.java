@@ -23,6 +23,7 @@ final class SessionCalculator {
     private final FatigueModel fatigueModel;
     private final DoseResponse dose;
     private final StrengthFigures strength;
+    private final double[] recoveryTimeConstants;
 
     SessionCalculator(ModelParameters params) {
         this.params = params;
@@ -33,10 +34,11 @@ final class SessionCalculator {
         this.fatigueModel = new FatigueModel(params);
         this.dose = new DoseResponse(params);
         this.strength = new StrengthFigures(params);
+        this.recoveryTimeConstants = FatigueState.timeConstants(fatigueModel);
     }
 
     SessionMetrics compute(Session session, ExerciseTable catalogue, Athlete athlete, LoadUnit units) {
-        FatigueState state = new FatigueState(fatigueModel);
+        FatigueState state = new FatigueState(recoveryTimeConstants);
         MuscleTallies tallies = new MuscleTallies();
         List<PlannedSet> plan = planner.plan(session);
         List<SetMetrics> sets = new ArrayList<>(plan.size());

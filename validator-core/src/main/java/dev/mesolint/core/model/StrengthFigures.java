@@ -18,6 +18,8 @@ final class StrengthFigures {
     private final double heavyFrom;
     /** Each zone's upper bound (exclusive); empty for the open-ended top zone. */
     private final OptionalDouble[] zoneBelow;
+    /** The zones of a lift none of whose sets has a known share of 1RM. */
+    private final List<IntensityZone> emptyZones;
 
     StrengthFigures(ModelParameters params) {
         this.zoneFrom = new double[] {0, params.intensityZone1From(), params.intensityZone2From(),
@@ -27,6 +29,11 @@ final class StrengthFigures {
         for (int i = 0; i < zoneFrom.length; i++) {
             zoneBelow[i] = i + 1 < zoneFrom.length ? OptionalDouble.of(zoneFrom[i + 1]) : OptionalDouble.empty();
         }
+        IntensityZone[] empty = new IntensityZone[zoneFrom.length];
+        for (int i = 0; i < zoneFrom.length; i++) {
+            empty[i] = new IntensityZone(i, zoneFrom[i], zoneBelow[i], 0, 0);
+        }
+        this.emptyZones = List.of(empty);
     }
 
     List<LiftSession> perSession(List<SetMetrics> sets) {
@@ -42,6 +49,7 @@ final class StrengthFigures {
                 continue;
             }
             int zone = zoneOf(fraction.getAsDouble());
+            lift.anyKnown = true;
             lift.zoneSets[zone]++;
             lift.zoneReps[zone] += set.reps();
         }
@@ -71,6 +79,9 @@ final class StrengthFigures {
     }
 
     private LiftSession zones(SessionLift lift) {
+        if (!lift.anyKnown) { // every zone empty: the shared list
+            return new LiftSession(lift.id, emptyZones, lift.unknown);
+        }
         IntensityZone[] zones = new IntensityZone[zoneFrom.length];
         for (int i = 0; i < zoneFrom.length; i++) {
             zones[i] = new IntensityZone(i, zoneFrom[i], zoneBelow[i], lift.zoneSets[i], lift.zoneReps[i]);
@@ -122,6 +133,8 @@ final class StrengthFigures {
         final int[] zoneSets;
         final double[] zoneReps;
         double unknown;
+        /** Whether some set's share of 1RM is known, so that some zone holds it. */
+        boolean anyKnown;
 
         SessionLift(String id, int zones) {
             super(id);

@@ -68,7 +68,7 @@ public final class FileScope {
     /** The lookups rules share in this file, made on first use. */
     public FileIndex index() {
         if (index == null) {
-            index = new FileIndex(catalogue, programme.weeks(), metrics.parameters());
+            index = new FileIndex(catalogue, programme.weeks(), metrics.parameters(), metrics.weeks());
         }
         return index;
     }

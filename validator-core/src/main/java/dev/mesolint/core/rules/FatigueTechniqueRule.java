@@ -80,6 +80,9 @@ public final class FatigueTechniqueRule implements Rule {
     }
 
     private static void reportTechniques(RuleContext context, Occurrences found) {
+        if (!context.index().sets().technique()) {
+            return;
+        }
         Occurrences.SetHits<Followed> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
