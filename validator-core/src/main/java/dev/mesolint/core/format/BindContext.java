@@ -26,6 +26,18 @@ final class BindContext {
         return l.withPointer(pointer);
     }
 
+    /** Where {@code parent} holds {@code key} (whose pointer is {@code pointer}); else as {@link #at(String)}. */
+    Location at(JsonNode parent, String key, String pointer) {
+        Location l = document.childAt(parent, key, pointer);
+        return l != null ? l : at(pointer);
+    }
+
+    /** Where {@code list} holds element {@code index} (whose pointer is {@code pointer}); else as {@link #at(String)}. */
+    Location at(JsonNode list, int index, String pointer) {
+        Location l = document.childAt(list, index, pointer);
+        return l != null ? l : at(pointer);
+    }
+
     List<Violation> violations() {
         return List.copyOf(violations);
     }
@@ -44,11 +56,10 @@ final class BindContext {
         if (node == null || node.isNull()) {
             return Optional.empty();
         }
-        String child = Pointers.child(pointer, key);
         try {
             return Optional.of(parser.parse(node.asString()));
         } catch (InvalidValueException e) {
-            reject(child, e);
+            reject(Pointers.child(pointer, key), e);
             return Optional.empty();
         }
     }

@@ -24,6 +24,10 @@ final class NumberRange {
     }
 
     static List<Violation> check(LocatedDocument document) {
+        // Nearly every document has no such number: look first, and spell out pointers only when there is one.
+        if (!anyTooLarge(document.root())) {
+            return List.of();
+        }
         List<Violation> out = new ArrayList<>();
         walk(document.root(), "", document, out);
         return out;
@@ -53,7 +57,25 @@ final class NumberRange {
         }
     }
 
+    private static boolean anyTooLarge(JsonNode node) {
+        if (node.isNumber()) {
+            return tooLarge(node);
+        }
+        if (node.isContainer()) {
+            for (JsonNode child : node.values()) {
+                if (anyTooLarge(child)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
     private static boolean tooLarge(JsonNode node) {
+        if (node.isInt() || node.isLong()) {
+            long value = node.longValue();
+            return value >= LIMIT.longValue() || value <= -LIMIT.longValue();
+        }
         if (node.isDouble() || node.isFloat()) {
             double d = node.doubleValue();
             return !Double.isFinite(d) || Math.abs(d) >= LIMIT.doubleValue();

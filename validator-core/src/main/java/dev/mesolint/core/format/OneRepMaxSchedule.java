@@ -4,6 +4,7 @@ import dev.mesolint.core.programme.Athlete;
 import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.OneRepMaxStep;
 import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Superset;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.programme.WorkItem;
@@ -15,7 +16,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.stream.Stream;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -58,15 +58,18 @@ final class OneRepMaxSchedule {
                 }
             }
         }
+        // Plain loops: this visits every set of the expanded block.
         for (Week week : weeks) {
             for (Session session : week.sessions()) {
-                exercises(session).filter(w -> w.sets().stream().anyMatch(s -> s.test())).forEach(w -> {
-                    List<OneRepMaxStep> list = steps.computeIfAbsent(w.exerciseId(), id -> initial(athlete, id));
-                    var testSet = w.sets().stream().filter(s -> s.test()).findFirst().orElseThrow();
-                    // The result counts from the next session on; its value is not known when the block is written.
-                    list.add(new OneRepMaxStep(week.number(), session.day() + 1, Optional.empty(), true,
-                            testSet.location()));
-                });
+                for (WorkItem item : session.work()) {
+                    if (item instanceof Superset s) {
+                        for (ExerciseWork w : s.items()) {
+                            addTest(steps, athlete, week, session, w);
+                        }
+                    } else {
+                        addTest(steps, athlete, week, session, (ExerciseWork) item);
+                    }
+                }
             }
         }
         if (steps.isEmpty()) {
@@ -75,6 +78,19 @@ final class OneRepMaxSchedule {
         steps.values().forEach(list -> list.sort(Comparator.comparingInt(OneRepMaxStep::week)
                 .thenComparingInt(OneRepMaxStep::day)));
         return new Athlete(athlete.oneRepMax(), athlete.constraints(), steps);
+    }
+
+    /** The 1RM test of {@code w}, if one of its sets is a test; its result counts from the next session on. */
+    private static void addTest(Map<String, List<OneRepMaxStep>> steps, Athlete athlete, Week week, Session session,
+            ExerciseWork w) {
+        for (SetPrescription set : w.sets()) {
+            if (set.test()) {
+                List<OneRepMaxStep> list = steps.computeIfAbsent(w.exerciseId(), id -> initial(athlete, id));
+                // Its value is not known when the block is written.
+                list.add(new OneRepMaxStep(week.number(), session.day() + 1, Optional.empty(), true, set.location()));
+                return;
+            }
+        }
     }
 
     private static List<OneRepMaxStep> initial(Athlete athlete, String exerciseId) {
@@ -116,13 +132,5 @@ final class OneRepMaxSchedule {
         } catch (dev.mesolint.core.value.InvalidValueException e) {
             return Optional.empty();
         }
-    }
-
-    private static Stream<ExerciseWork> exercises(Session session) {
-        return session.work().stream().flatMap(OneRepMaxSchedule::exercises);
-    }
-
-    private static Stream<ExerciseWork> exercises(WorkItem item) {
-        return item instanceof Superset s ? s.items().stream() : Stream.of((ExerciseWork) item);
     }
 }

@@ -108,8 +108,8 @@ public final class ProgrammeBinder {
             JsonNode deload = w.get("deload");
             drafts.add(new WeekDraft(w.get("week").asInt(), deload != null && deload.asBoolean(), repeat, adjust,
                     sessions.sessions(w.get("sessions"), Pointers.child(pointer, "sessions"), waivers),
-                    ctx.at(pointer), ctx.at(Pointers.child(pointer, "week")),
-                    ctx.at(Pointers.child(pointer, "repeat")), waivers));
+                    ctx.at(list, i, pointer), ctx.at(w, "week", Pointers.child(pointer, "week")),
+                    ctx.at(w, "repeat", Pointers.child(pointer, "repeat")), waivers));
         }
         return drafts;
     }

@@ -45,12 +45,13 @@ final class SessionBinder {
             return out;
         }
         for (int i = 0; i < list.size(); i++) {
-            out.add(session(list.get(i), Pointers.child(pointer, i), inherited));
+            String sessionPointer = Pointers.child(pointer, i);
+            out.add(session(list.get(i), sessionPointer, ctx.at(list, i, sessionPointer), inherited));
         }
         return out;
     }
 
-    private Session session(JsonNode s, String pointer, List<Waiver> inherited) {
+    private Session session(JsonNode s, String pointer, Location at, List<Waiver> inherited) {
         List<Waiver> waivers = WaiverBinder.read(ctx, s, pointer, inherited, false);
         List<WorkItem> work = new ArrayList<>();
         JsonNode items = s.get("work");
@@ -58,15 +59,19 @@ final class SessionBinder {
         for (int i = 0; i < items.size(); i++) {
             JsonNode item = items.get(i);
             String itemPointer = Pointers.child(workPointer, i);
-            work.add(item.has("superset")
-                    ? superset(item.get("superset"), Pointers.child(itemPointer, "superset"), waivers)
-                    : exercise(item, itemPointer, waivers));
+            if (item.has("superset")) {
+                String supersetPointer = Pointers.child(itemPointer, "superset");
+                work.add(superset(item.get("superset"), supersetPointer, ctx.at(item, "superset", supersetPointer),
+                        waivers));
+            } else {
+                work.add(exercise(item, itemPointer, ctx.at(items, i, itemPointer), waivers));
+            }
         }
-        return new Session(s.get("day").asInt(), BindContext.text(s, "name"), work, ctx.at(pointer),
-                ctx.at(Pointers.child(pointer, "day")), waivers);
+        return new Session(s.get("day").asInt(), BindContext.text(s, "name"), work, at,
+                ctx.at(s, "day", Pointers.child(pointer, "day")), waivers);
     }
 
-    private ExerciseWork exercise(JsonNode e, String pointer, List<Waiver> inherited) {
+    private ExerciseWork exercise(JsonNode e, String pointer, Location at, List<Waiver> inherited) {
         List<Waiver> waivers = WaiverBinder.read(ctx, e, pointer, inherited, false);
         SetDefaults defaults = defaults(e, pointer);
         List<SetPrescription> sets = new ArrayList<>();
@@ -76,23 +81,24 @@ final class SessionBinder {
             for (int i = 0; i < setsNode.size(); i++) {
                 String setPointer = Pointers.child(setsPointer, i);
                 JsonNode set = setsNode.get(i);
-                sets.add(defaults.override(defaults(set, setPointer)).toSet(i + 1, ctx.at(setPointer),
+                sets.add(defaults.override(defaults(set, setPointer)).toSet(i + 1, ctx.at(setsNode, i, setPointer),
                         WaiverBinder.read(ctx, set, setPointer, waivers, false), ctx, setPointer));
             }
         } else {
             int count = setsNode == null ? 1 : setsNode.asInt();
+            SetDefaults beforeLast = defaults.beforeLastSet();
             for (int i = 1; i <= count; i++) {
                 // A technique, and the "as many as possible" of 5+, written on the entry belong to its last set.
-                SetDefaults forSet = i == count ? defaults : defaults.beforeLastSet();
-                sets.add(forSet.toSet(i, ctx.at(pointer), waivers, ctx, pointer));
+                SetDefaults forSet = i == count ? defaults : beforeLast;
+                sets.add(forSet.toSet(i, at, waivers, ctx, pointer));
             }
         }
         JsonNode warmUp = e.get("warm-up");
-        return new ExerciseWork(e.get("exercise").asString(), warmUp == null ? 0 : warmUp.asInt(), sets, ctx.at(pointer),
-                ctx.at(Pointers.child(pointer, "exercise")), waivers, role(e));
+        return new ExerciseWork(e.get("exercise").asString(), warmUp == null ? 0 : warmUp.asInt(), sets, at,
+                ctx.at(e, "exercise", Pointers.child(pointer, "exercise")), waivers, role(e));
     }
 
-    private Superset superset(JsonNode s, String pointer, List<Waiver> inherited) {
+    private Superset superset(JsonNode s, String pointer, Location at, List<Waiver> inherited) {
         List<Waiver> waivers = WaiverBinder.read(ctx, s, pointer, inherited, false);
         int rounds = s.get("rounds").asInt();
         List<ExerciseWork> items = new ArrayList<>();
@@ -103,15 +109,17 @@ final class SessionBinder {
             JsonNode item = list.get(i);
             List<Waiver> itemWaivers = WaiverBinder.read(ctx, item, itemPointer, waivers, false);
             SetDefaults defaults = defaults(item, itemPointer);
+            Location itemAt = ctx.at(list, i, itemPointer);
             List<SetPrescription> sets = new ArrayList<>();
+            SetDefaults beforeLast = defaults.beforeLastSet();
             for (int round = 1; round <= rounds; round++) {
-                SetDefaults forRound = round == rounds ? defaults : defaults.beforeLastSet();
-                sets.add(forRound.toSet(round, ctx.at(itemPointer), itemWaivers, ctx, itemPointer));
+                SetDefaults forRound = round == rounds ? defaults : beforeLast;
+                sets.add(forRound.toSet(round, itemAt, itemWaivers, ctx, itemPointer));
             }
-            items.add(new ExerciseWork(item.get("exercise").asString(), 0, sets, ctx.at(itemPointer),
-                    ctx.at(Pointers.child(itemPointer, "exercise")), itemWaivers, role(item)));
+            items.add(new ExerciseWork(item.get("exercise").asString(), 0, sets, itemAt,
+                    ctx.at(item, "exercise", Pointers.child(itemPointer, "exercise")), itemWaivers, role(item)));
         }
-        return new Superset(rounds, ctx.value(s, pointer, "rest", Durations::parse), items, ctx.at(pointer), waivers);
+        return new Superset(rounds, ctx.value(s, pointer, "rest", Durations::parse), items, at, waivers);
     }
 
     private static Optional<Role> role(JsonNode node) {
@@ -122,7 +130,7 @@ final class SessionBinder {
         Map<String, Location> written = new HashMap<>();
         for (String key : SET_KEYS) {
             if (node.has(key)) {
-                written.put(key, ctx.at(Pointers.child(pointer, key)));
+                written.put(key, ctx.at(node, key, Pointers.child(pointer, key)));
             }
         }
         Optional<RepTarget> reps = ctx.value(node, pointer, "reps", RepTarget::parse);
@@ -148,7 +156,7 @@ final class SessionBinder {
                 ctx.value(node, pointer, "tempo", Tempo::parse),
                 Optional.ofNullable(BindContext.text(node, "technique"))
                         .map(t -> CatalogueEntryBinder.named(Technique.class, t)), test, amounts > 0,
-                written);
+                Map.copyOf(written));
     }
 
     /** Values written on an exercise entry that its sets inherit unless a set overrides them. */
@@ -170,6 +178,7 @@ final class SessionBinder {
                 AMOUNT_KEYS.forEach(places::remove);
             }
             places.putAll(set.written);
+            places = Map.copyOf(places);
             return new SetDefaults(setStatesAmount ? set.reps : reps, setStatesAmount ? set.hold : hold,
                     setStatesAmount ? set.distance : distance,
                     setStatesEffort ? set.rir : rir, setStatesEffort ? set.rpe : rpe,
@@ -185,9 +194,12 @@ final class SessionBinder {
         }
 
         private Map<String, Location> withoutTechnique() {
+            if (!written.containsKey("technique")) {
+                return written;
+            }
             Map<String, Location> places = new HashMap<>(written);
             places.remove("technique");
-            return places;
+            return Map.copyOf(places);
         }
 
         SetPrescription toSet(int number, Location location, List<Waiver> waivers,

@@ -21,7 +21,7 @@ final class WaiverBinder {
         String base = Pointers.child(pointer, "waive");
         for (int i = 0; i < list.size(); i++) {
             JsonNode w = list.get(i);
-            all.add(new Waiver(w.get("rule").asString(), w.get("reason").asString(), ctx.at(Pointers.child(base, i)),
+            all.add(new Waiver(w.get("rule").asString(), w.get("reason").asString(), ctx.at(list, i, Pointers.child(base, i)),
                     wholeFile));
         }
         return List.copyOf(all);

@@ -12,9 +12,12 @@ import java.util.OptionalDouble;
  */
 final class EffortAgreementCheck {
     private final double tolerance;
+    /** Immutable, so every set without a check shares it. */
+    private final EffortAgreement notChecked;
 
     EffortAgreementCheck(double tolerance) {
         this.tolerance = tolerance;
+        this.notChecked = EffortAgreement.notChecked(tolerance);
     }
 
     /**
@@ -38,7 +41,7 @@ final class EffortAgreementCheck {
             return new EffortAgreement(differ ? AgreementStatus.RIR_RPE_DIFFER : AgreementStatus.AGREE,
                     OptionalDouble.empty(), OptionalDouble.empty(), statedMid, tolerance);
         }
-        return EffortAgreement.notChecked(tolerance);
+        return notChecked;
     }
 
     private AgreementStatus loadStatus(double reps, double repsUpper, double repsToFailure, Optional<RirRange> stated) {

@@ -16,6 +16,9 @@ import java.util.OptionalDouble;
  * RIR, then RPE, then the load give r. Disagreements between them are reported in {@link Effort#agreement()}.
  */
 public final class EffortResolver {
+    /** A 1RM test without a load is a single at 100% of the 1RM being tested. */
+    private static final Optional<Load> TEST_LOAD = Optional.of(new Load.Relative(1.0));
+
     private final ModelParameters params;
     private final EffortAgreementCheck agreementCheck;
 
@@ -37,9 +40,10 @@ public final class EffortResolver {
      *                  inferred from its load (only a stated RIR or RPE gives its effort)
      */
     public Effort resolve(SetPrescription set, String exerciseId, boolean ballistic, Athlete athlete, LoadUnit units) {
-        // A 1RM test without a load is a single at 100% of the 1RM being tested.
-        Optional<Load> written = set.test() && set.load().isEmpty() ? Optional.of(new Load.Relative(1.0)) : set.load();
-        ResolvedLoad load = LoadResolver.resolve(written, athlete.oneRepMax(exerciseId), units);
+        Optional<Load> written = set.test() && set.load().isEmpty() ? TEST_LOAD : set.load();
+        // without a load there is nothing to look the athlete's 1RM up for
+        ResolvedLoad load = written.isEmpty() ? ResolvedLoad.NONE
+                : LoadResolver.resolve(written, athlete.oneRepMax(exerciseId), units);
         OptionalDouble repsToFailure = load.fraction().isPresent() && !ballistic
                 ? OptionalDouble.of(params.oneRepMaxRelation().repsToFailure(load.fraction().getAsDouble()))
                 : OptionalDouble.empty();

@@ -33,9 +33,18 @@ public final class FatigueModel {
      * (Schoenfeld et al. 2016 saw the largest rest effect in the thigh).
      */
     public double remaining(Muscle muscle, double fatigue, double seconds) {
-        double tau = params.recoveryTimeConstantSeconds()
+        return fatigue * decay(seconds, recoveryTimeConstantSeconds(muscle));
+    }
+
+    /** The time for {@code muscle}'s residual fatigue to fall to 1/e. */
+    double recoveryTimeConstantSeconds(Muscle muscle) {
+        return params.recoveryTimeConstantSeconds()
                 * (isLargeLowerBody(muscle) ? params.lowerBodyRecoveryFactor() : 1);
-        return fatigue * Math.exp(-seconds / tau);
+    }
+
+    /** The share of fatigue left after {@code seconds} with time constant {@code tau}. */
+    static double decay(double seconds, double tau) {
+        return Math.exp(-seconds / tau);
     }
 
     private static boolean isLargeLowerBody(Muscle muscle) {

@@ -1,11 +1,11 @@
 package dev.mesolint.core.model;
 
 import dev.mesolint.core.catalogue.Catalogue;
-import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.programme.Programme;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.value.LoadUnit;
+import java.util.ArrayList;
 import java.util.Collections;
 import java.util.Comparator;
 import java.util.EnumMap;
@@ -40,25 +40,34 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
      * exercises found in neither are left out (another rule reports them).
      */
     public static ProgrammeMetrics compute(Programme programme, Catalogue catalogue, ModelParameters params) {
-        Catalogue effective = catalogue.overlay(programme.localExercises());
+        ExerciseTable exercises = new ExerciseTable(catalogue.overlay(programme.localExercises()));
         LoadUnit units = programme.info().units();
         WeekCalculator calculator = new WeekCalculator(params);
-        List<WeekMetrics> weeks = programme.weeks().stream()
-                .sorted(Comparator.comparingInt(Week::number))
-                .map(w -> calculator.compute(w, effective, programme.athlete(), units))
-                .toList();
+        List<Week> inOrder = new ArrayList<>(programme.weeks());
+        inOrder.sort(Comparator.comparingInt(Week::number));
+        List<WeekMetrics> weeks = new ArrayList<>(inOrder.size());
+        for (Week week : inOrder) {
+            weeks.add(calculator.compute(week, exercises, programme.athlete(), units));
+        }
         return new ProgrammeMetrics(programme.info().id(), units, params, new TrendCalculator(params).withTrends(weeks),
-                directlyTrained(weeks, effective));
+                directlyTrained(weeks, exercises));
     }
 
-    private static Map<Muscle, String> directlyTrained(List<WeekMetrics> weeks, Catalogue catalogue) {
+    private static Map<Muscle, String> directlyTrained(List<WeekMetrics> weeks, ExerciseTable exercises) {
         Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
-        weeks.forEach(week -> week.sessions().forEach(session -> session.sets().forEach(set ->
-                catalogue.find(set.exerciseId()).ifPresent(e -> e.muscles().forEach((muscle, credit) -> {
-                    if (credit >= Exercise.PRIME_MOVER) {
-                        direct.putIfAbsent(muscle, e.id());
-                    }
-                })))));
+        // A week's lifts are its sets' exercises in the order each first appears, so reading them in week order
+        // meets every exercise first where its first set is.
+        for (WeekMetrics week : weeks) {
+            for (LiftWeek lift : week.lifts()) {
+                ExerciseFigures exercise = exercises.find(lift.exerciseId());
+                if (exercise == null) {
+                    continue;
+                }
+                for (Muscle muscle : exercise.primeMovers) {
+                    direct.putIfAbsent(muscle, exercise.exercise.id());
+                }
+            }
+        }
         return direct;
     }
 

@@ -1,18 +1,13 @@
 package dev.mesolint.core.model;
 
-import dev.mesolint.core.catalogue.Catalogue;
-import dev.mesolint.core.catalogue.Exercise;
-import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.programme.Athlete;
+import dev.mesolint.core.programme.ExerciseWork;
 import dev.mesolint.core.programme.Session;
+import dev.mesolint.core.programme.SetPrescription;
+import dev.mesolint.core.value.Durations;
 import dev.mesolint.core.value.LoadUnit;
-import dev.mesolint.core.value.Tempo;
 import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -28,6 +23,7 @@ final class SessionCalculator {
     private final FatigueModel fatigueModel;
     private final DoseResponse dose;
     private final StrengthFigures strength;
+    private final double[] recoveryTimeConstants;
 
     SessionCalculator(ModelParameters params) {
         this.params = params;
@@ -38,121 +34,115 @@ final class SessionCalculator {
         this.fatigueModel = new FatigueModel(params);
         this.dose = new DoseResponse(params);
         this.strength = new StrengthFigures(params);
+        this.recoveryTimeConstants = FatigueState.timeConstants(fatigueModel);
     }
 
-    SessionMetrics compute(Session session, Catalogue catalogue, Athlete athlete, LoadUnit units) {
-        FatigueState state = FatigueState.FRESH;
-        Map<Muscle, MuscleTally> tallies = new EnumMap<>(Muscle.class);
-        List<SetMetrics> sets = new ArrayList<>();
+    SessionMetrics compute(Session session, ExerciseTable catalogue, Athlete athlete, LoadUnit units) {
+        FatigueState state = new FatigueState(recoveryTimeConstants);
+        MuscleTallies tallies = new MuscleTallies();
+        List<PlannedSet> plan = planner.plan(session);
+        List<SetMetrics> sets = new ArrayList<>(plan.size());
         double seconds = 0;
         double recoveryBefore = 0;
         double volumeLoad = 0;
 
-        for (PlannedSet planned : planner.plan(session)) {
-            String id = planned.work().exerciseId();
-            Optional<Exercise> exercise = catalogue.find(id);
-            Effort effort = resolver.resolve(planned.set(), id, exercise.map(Exercise::ballistic).orElse(false),
-                    athlete, units);
+        ExerciseWork work = null;
+        ExerciseFigures exercise = null;
+        SetPrescription previous = null;
+        SetWork setWork = null;
+        for (PlannedSet planned : plan) {
+            SetPrescription set = planned.set();
+            if (planned.work() != work) { // an entry's sets follow each other: look its exercise up once
+                work = planned.work();
+                exercise = catalogue.find(work.exerciseId());
+                previous = null;
+            }
+            if (previous == null || !SamePrescription.effortAndTechnique(previous, set)) {
+                setWork = resolve(set, work.exerciseId(), exercise, athlete, units);
+            }
+            previous = set;
+            Effort effort = setWork.effort;
             // A hold or a carry counts as time only (docs/model.md): no stimulating reps, not a hard set.
-            boolean holdOrCarry = planned.set().holdOrCarry();
+            boolean holdOrCarry = set.holdOrCarry();
             // The effort is unknown or the exercise is: the set takes time but adds no stimulus or fatigue.
-            boolean modelled = effort.known() && exercise.isPresent() && !holdOrCarry;
-            List<Bout> bouts = techniques.expand(effort.reps(), effort.rir().orElse(0), planned.set().technique());
-            double repSeconds = holdOrCarry ? holdOrCarrySeconds(planned.set())
-                    : planned.set().tempo().map(Tempo::secondsPerRep).orElse(params.defaultRepSeconds());
+            boolean modelled = effort.known() && exercise != null && !holdOrCarry;
+            boolean counted = exercise != null && !holdOrCarry;
+            double repSeconds = holdOrCarry ? holdOrCarrySeconds(set)
+                    : set.tempo().isPresent() ? set.tempo().get().secondsPerRep() : params.defaultRepSeconds();
 
-            state = state.recover(recoveryBefore + planned.setupSecondsBefore(), fatigueModel);
+            state.recover(recoveryBefore + planned.setupSecondsBefore());
             seconds += planned.setupSecondsBefore();
-            FatigueState atStart = state;
-            Map<Muscle, Double> muscleStimulus = new EnumMap<>(Muscle.class);
-            double stimulatingReps = 0;
-            for (Bout bout : bouts) {
-                state = state.recover(bout.pauseBeforeSeconds(), fatigueModel);
+            MuscleValues atStart = counted ? state.snapshot() : null;
+            double[] stimulusByOrdinal = modelled ? new double[MuscleValues.muscleCount()] : null;
+            long stimulated = 0;
+            List<Bout> bouts = setWork.bouts;
+            for (int b = 0; b < bouts.size(); b++) {
+                Bout bout = bouts.get(b);
+                state.recover(bout.pauseBeforeSeconds());
                 double duration = bout.reps() * repSeconds;
                 if (modelled) {
-                    double sr = stimulusModel.stimulatingReps(bout.reps(), bout.rir());
-                    stimulatingReps += sr;
-                    for (Map.Entry<Muscle, Double> credit : exercise.get().muscles().entrySet()) {
+                    double sr = setWork.stimulatingReps[b];
+                    for (int k = 0; k < exercise.ordinals.length; k++) {
+                        int i = exercise.ordinals[k];
                         // A mini-set goes on with the units the set has already recruited: its fatigue shortens
                         // it (fewer reps), it does not lower the recruitment its reps reach (docs/model.md).
-                        double recruitment = 1 - atStart.of(credit.getKey());
-                        muscleStimulus.merge(credit.getKey(),
-                                credit.getValue() * stimulusModel.stimulus(sr, recruitment), Double::sum);
+                        double recruitment = 1 - atStart.at(i);
+                        double added = exercise.credits[k] * stimulusModel.stimulus(sr, recruitment);
+                        long bit = MuscleValues.bit(i);
+                        stimulusByOrdinal[i] = (stimulated & bit) != 0 ? stimulusByOrdinal[i] + added : added;
+                        stimulated |= bit;
                     }
-                    state = state.recover(duration, fatigueModel)
-                            .after(exercise.get(), fatigueModel.fatigueOf(bout, exercise.get().isCompound()));
+                    state.recover(duration);
+                    state.add(exercise, setWork.fatigue[b]);
                 } else {
-                    state = state.recover(duration, fatigueModel);
+                    state.recover(duration);
                 }
                 seconds += bout.pauseBeforeSeconds() + duration;
             }
             seconds += planned.restAfterSeconds();
             recoveryBefore = planned.restAfterSeconds();
 
-            if (exercise.isEmpty() || holdOrCarry) {
+            if (!counted) {
                 continue;
             }
-            OptionalDouble setVolume = volumeLoad(effort, bouts);
-            volumeLoad += setVolume.orElse(0);
-            boolean hard = effort.known() && effort.rir().getAsDouble() <= params.hardSetMaxRir();
-            tally(tallies, exercise.get(), effort, hard, stimulatingReps, muscleStimulus);
-            sets.add(metrics(planned, exercise.get(), effort, hard, stimulatingReps, bouts, atStart, muscleStimulus,
-                    setVolume));
+            MuscleValues muscleStimulus = new MuscleValues(stimulusByOrdinal, stimulated);
+            double stimulatingReps = modelled ? setWork.totalStimulatingReps : 0;
+            volumeLoad += setWork.volumeLoad.orElse(0);
+            tallies.add(exercise, effort.known(), setWork.hard, stimulatingReps, muscleStimulus);
+            sets.add(metrics(planned, exercise, setWork, stimulatingReps, atStart, muscleStimulus));
         }
-        Map<Muscle, MuscleSession> muscles = new EnumMap<>(Muscle.class);
-        tallies.forEach((muscle, tally) -> muscles.put(muscle, tally.toSession(dose)));
-        return new SessionMetrics(session.day(), session.name(), session.location(), seconds / 60, muscles, sets,
-                volumeLoad, strength.perSession(sets));
+        return new SessionMetrics(session.day(), session.name(), session.location(), seconds / 60,
+                tallies.toSessions(dose), sets, volumeLoad, strength.perSession(sets));
     }
 
     /** A loaded carry is walked at about 1 m/s (from memory; a brisk walk under load). */
     private static final double CARRY_METRES_PER_SECOND = 1.0;
 
     /** The duration of a hold, or a carry's distance at walking pace: the set is one effort of this length. */
-    private static double holdOrCarrySeconds(dev.mesolint.core.programme.SetPrescription set) {
-        return set.hold().map(dev.mesolint.core.value.Durations::seconds)
-                .orElseGet(() -> set.distance().orElseThrow().metres() / CARRY_METRES_PER_SECOND);
+    private static double holdOrCarrySeconds(SetPrescription set) {
+        return set.hold().isPresent() ? Durations.seconds(set.hold().get())
+                : set.distance().orElseThrow().metres() / CARRY_METRES_PER_SECOND;
     }
 
-    private static void tally(Map<Muscle, MuscleTally> tallies, Exercise exercise, Effort effort, boolean hard,
-            double stimulatingReps, Map<Muscle, Double> muscleStimulus) {
-        exercise.muscles().forEach((muscle, credit) -> {
-            MuscleTally t = tallies.computeIfAbsent(muscle, m -> new MuscleTally());
-            t.hardSets += hard ? credit : 0;
-            t.stimulatingReps += credit * stimulatingReps;
-            t.rawStimulus += muscleStimulus.getOrDefault(muscle, 0.0);
-            t.unknownEffortSets += effort.known() ? 0 : credit;
-        });
+    /** The set's effort, resolved from what it states, and what that alone decides. */
+    private SetWork resolve(SetPrescription set, String exerciseId, ExerciseFigures exercise, Athlete athlete,
+            LoadUnit units) {
+        Effort effort = resolver.resolve(set, exerciseId, exercise != null && exercise.exercise.ballistic(), athlete,
+                units);
+        List<Bout> bouts = techniques.expand(effort.reps(), effort.known() ? effort.rir().getAsDouble() : 0,
+                set.technique());
+        return new SetWork(effort, bouts, exercise != null && exercise.exercise.isCompound(), params, stimulusModel,
+                fatigueModel);
     }
 
-    private SetMetrics metrics(PlannedSet planned, Exercise exercise, Effort effort, boolean hard,
-            double stimulatingReps, List<Bout> bouts, FatigueState atStart, Map<Muscle, Double> muscleStimulus,
-            OptionalDouble volumeLoad) {
-        Optional<Muscle> reference = referenceMuscle(exercise);
-        double recruitment = reference.map(m -> 1 - atStart.of(m)).orElse(1.0);
-        double stimulus = reference
-                .map(m -> muscleStimulus.getOrDefault(m, 0.0) / exercise.credit(m))
-                .orElse(0.0);
-        double extraReps = bouts.stream().skip(1).mapToDouble(Bout::reps).sum();
-        return new SetMetrics(exercise.id(), planned.set().number(), planned.round(), planned.set().location(),
-                planned.set(), planned.work(), reference, effort, hard, stimulatingReps, extraReps, recruitment,
-                stimulus, muscleStimulus, atStart.levels(), planned.restAfterSeconds(), volumeLoad);
-    }
-
-    /** The prime mover, else the most-credited muscle (first in muscle order on ties). */
-    private static Optional<Muscle> referenceMuscle(Exercise exercise) {
-        return exercise.primeMover().or(() -> exercise.muscles().entrySet().stream()
-                .filter(e -> e.getValue() > 0)
-                .max(Comparator.<Map.Entry<Muscle, Double>>comparingDouble(Map.Entry::getValue)
-                        .thenComparing(Map.Entry::getKey, Comparator.reverseOrder()))
-                .map(Map.Entry::getKey));
-    }
-
-    private static OptionalDouble volumeLoad(Effort effort, List<Bout> bouts) {
-        if (effort.absoluteLoad().isEmpty()) {
-            return OptionalDouble.empty();
-        }
-        double weight = effort.absoluteLoad().getAsDouble();
-        return OptionalDouble.of(bouts.stream().mapToDouble(b -> b.reps() * b.loadFactor() * weight).sum());
+    private SetMetrics metrics(PlannedSet planned, ExerciseFigures exercise, SetWork setWork, double stimulatingReps,
+            MuscleValues atStart, MuscleValues muscleStimulus) {
+        boolean referenced = exercise.reference.isPresent();
+        double recruitment = referenced ? 1 - atStart.at(exercise.referenceOrdinal) : 1.0;
+        double stimulus = referenced ? muscleStimulus.at(exercise.referenceOrdinal) / exercise.referenceCredit : 0.0;
+        return new SetMetrics(exercise.exercise.id(), planned.set().number(), planned.round(), planned.set().location(),
+                planned.set(), planned.work(), exercise.reference, setWork.effort, setWork.hard, stimulatingReps,
+                setWork.extraReps, recruitment, stimulus, muscleStimulus, atStart, planned.restAfterSeconds(),
+                setWork.volumeLoad);
     }
 }

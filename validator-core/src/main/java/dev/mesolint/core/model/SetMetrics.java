@@ -39,7 +39,11 @@ public record SetMetrics(String exerciseId, int setNumber, int round, Location l
     }
 
     private static Map<Muscle, Double> copy(Map<Muscle, Double> map) {
-        return map.isEmpty() ? Map.of() : Collections.unmodifiableMap(new EnumMap<>(map));
+        if (map.isEmpty()) {
+            return Map.of();
+        }
+        // the model's own per-set maps are unmodifiable already: no copy per set
+        return map instanceof MuscleValues ? map : Collections.unmodifiableMap(new EnumMap<>(map));
     }
 
     /** Reps performed, n (a range's midpoint). */

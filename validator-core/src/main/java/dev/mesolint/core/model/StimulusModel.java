@@ -10,11 +10,14 @@ public final class StimulusModel {
     private final double ceiling;
     private final double tail;
     private final double floor;
+    /** 1 - floor, worked out once rather than per set and muscle. */
+    private final double growablePool;
 
     public StimulusModel(ModelParameters params) {
         this.ceiling = params.stimulatingRepsCeiling();
         this.tail = params.stimulatingRepsTail();
         this.floor = params.recruitmentFloor();
+        this.growablePool = 1 - floor;
     }
 
     /**
@@ -31,7 +34,7 @@ public final class StimulusModel {
 
     /** Share of the still-growable pool reached: (rho - floor) / (1 - floor), never below 0. */
     public double growthShare(double recruitment) {
-        return Math.max(0, (recruitment - floor) / (1 - floor));
+        return Math.max(0, (recruitment - floor) / growablePool);
     }
 
     /** Stimulus in units of one fresh hard set (K stimulating reps at full recruitment = 1.0). */

@@ -21,11 +21,11 @@ final class TechniqueBouts {
     }
 
     List<Bout> expand(double reps, double rir, Optional<Technique> technique) {
+        if (technique.isEmpty()) {
+            return List.of(Bout.main(reps, rir));
+        }
         List<Bout> bouts = new ArrayList<>();
         bouts.add(Bout.main(reps, rir));
-        if (technique.isEmpty()) {
-            return bouts;
-        }
         switch (technique.get()) {
             case DROP_SET -> {
                 double load = 1;

@@ -1,6 +1,5 @@
 package dev.mesolint.core.model;
 
-import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.programme.Athlete;
 import dev.mesolint.core.programme.Session;
@@ -30,12 +29,14 @@ final class WeekCalculator {
         this.dose = new DoseResponse(params);
     }
 
-    WeekMetrics compute(Week week, Catalogue catalogue, Athlete athlete, LoadUnit units) {
-        List<SessionMetrics> computed = week.sessions().stream()
-                .sorted(Comparator.comparingInt(Session::day))
-                // each session sees the 1RMs in force for it (stated per week, or unknown after a test)
-                .map(s -> sessions.compute(s, catalogue, athlete.atSession(week.number(), s.day()), units))
-                .toList();
+    WeekMetrics compute(Week week, ExerciseTable catalogue, Athlete athlete, LoadUnit units) {
+        List<Session> inOrder = new ArrayList<>(week.sessions());
+        inOrder.sort(Comparator.comparingInt(Session::day));
+        List<SessionMetrics> computed = new ArrayList<>(inOrder.size());
+        for (Session s : inOrder) {
+            // each session sees the 1RMs in force for it (stated per week, or unknown after a test)
+            computed.add(sessions.compute(s, catalogue, athlete.atSession(week.number(), s.day()), units));
+        }
         Set<Muscle> trained = EnumSet.noneOf(Muscle.class);
         computed.forEach(s -> trained.addAll(s.muscles().keySet()));
         Map<Muscle, MuscleWeek> muscles = new EnumMap<>(Muscle.class);

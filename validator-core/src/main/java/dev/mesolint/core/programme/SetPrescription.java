@@ -66,6 +66,9 @@ public record SetPrescription(int number, RepTarget reps, Optional<RirRange> rir
     }
 
     private static Map<String, Location> withoutTechnique(Map<String, Location> places) {
+        if (!places.containsKey("technique")) {
+            return places; // already immutable: the copy in the constructor keeps it as it is
+        }
         Map<String, Location> copy = new java.util.HashMap<>(places);
         copy.remove("technique");
         return copy;

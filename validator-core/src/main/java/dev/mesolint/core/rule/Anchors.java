@@ -3,6 +3,8 @@ package dev.mesolint.core.rule;
 import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
+import java.util.HashMap;
+import java.util.Map;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -20,28 +22,90 @@ public final class Anchors {
 
     /** The anchor of {@code pointer} in the programme {@code id} (null when unknown: the file path stands in). */
     public static Anchor of(LocatedDocument document, String id, String file, String pointer) {
-        String path = document == null ? pointer : logicalPath(document.root(), pointer);
+        return of(document == null ? null : new Paths(document.root()), id, file, pointer);
+    }
+
+    /** As {@link #of(LocatedDocument, String, String, String)}, with the file's paths resolved so far. */
+    static Anchor of(Paths paths, String id, String file, String pointer) {
+        String path = paths == null ? pointer : paths.of(pointer);
         return id == null || id.isBlank() ? Anchor.ofFile(file, path) : Anchor.ofProgramme(id, path);
     }
 
     static String logicalPath(JsonNode root, String pointer) {
-        if (pointer.isEmpty()) {
-            return "";
+        return new Paths(root).of(pointer);
+    }
+
+    /**
+     * The logical paths of one document's pointers. Findings of a file share most of their pointers' prefixes (the
+     * week, the session, the exercise), so each prefix is resolved once. Confined to the thread that checks the file.
+     */
+    static final class Paths {
+        /** A pointer's logical path and the node it points at (null past the end of the document). */
+        private record Resolved(String path, JsonNode node) {
         }
-        StringBuilder out = new StringBuilder();
-        JsonNode node = root;
-        for (String raw : pointer.substring(1).split("/", -1)) {
-            String segment = raw.replace("~1", "/").replace("~0", "~");
-            if (node != null && node.isArray() && segment.matches("\\d{1,9}")) {
-                int index = Integer.parseInt(segment);
-                out.append('/').append(index < node.size() ? name(node, index) : segment);
-                node = node.get(index);
-            } else {
-                out.append(Pointers.child("", segment));
-                node = node == null ? null : node.get(segment);
+
+        private final Map<String, Resolved> byPointer = new HashMap<>();
+        private final Resolved root;
+
+        Paths(JsonNode root) {
+            this.root = new Resolved("", root);
+        }
+
+        String of(String pointer) {
+            if (pointer.isEmpty()) {
+                return "";
             }
+            if (pointer.charAt(0) != '/') {
+                // Not a well-formed pointer: read past its first character, segment by segment, without keeping it.
+                Resolved at = root;
+                for (String raw : pointer.substring(1).split("/", -1)) {
+                    at = step(at, raw);
+                }
+                return at.path();
+            }
+            return resolve(pointer).path();
         }
-        return out.toString();
+
+        private Resolved resolve(String pointer) {
+            if (pointer.isEmpty()) {
+                return root;
+            }
+            Resolved known = byPointer.get(pointer);
+            if (known == null) {
+                int cut = pointer.lastIndexOf('/');
+                Resolved parent = cut <= 0 ? root : resolve(pointer.substring(0, cut));
+                known = step(parent, pointer.substring(cut + 1));
+                byPointer.put(pointer, known);
+            }
+            return known;
+        }
+
+        /** One segment on from {@code parent}: a list position becomes the element's name where it has one. */
+        private static Resolved step(Resolved parent, String raw) {
+            String segment = raw.replace("~1", "/").replace("~0", "~");
+            JsonNode node = parent.node();
+            if (node != null && node.isArray() && isIndex(segment)) {
+                int index = Integer.parseInt(segment);
+                return new Resolved(parent.path() + '/' + (index < node.size() ? name(node, index) : segment),
+                        node.get(index));
+            }
+            return new Resolved(Pointers.child(parent.path(), segment), node == null ? null : node.get(segment));
+        }
+
+        /** One to nine ASCII digits. */
+        private static boolean isIndex(String segment) {
+            int n = segment.length();
+            if (n < 1 || n > 9) {
+                return false;
+            }
+            for (int i = 0; i < n; i++) {
+                char c = segment.charAt(i);
+                if (c < '0' || c > '9') {
+                    return false;
+                }
+            }
+            return true;
+        }
     }
 
     /** The element's name, with its occurrence among earlier siblings of the same name from the second on. */

@@ -5,7 +5,10 @@ import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.model.RestGap;
+import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SessionRests;
+import dev.mesolint.core.model.SetMetrics;
+import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.Week;
 import java.util.ArrayList;
@@ -16,8 +19,8 @@ import java.util.Map;
 
 /**
  * What several rules look up in one file, worked out once and shared: the exercise entries the programme names, each
- * entry's prime movers, the written weeks by number and each session's rests. Filled on first use, so a rule that
- * asks nothing costs nothing. Confined to the thread that checks the file.
+ * entry's prime movers, the written weeks by number, each session's rests and what kinds of set the programme has.
+ * Filled on first use, so a rule that asks nothing costs nothing. Confined to the thread that checks the file.
  */
 public final class FileIndex {
     private static final List<Muscle> NO_MUSCLES = List.of();
@@ -25,15 +28,49 @@ public final class FileIndex {
     private final Catalogue catalogue;
     private final List<Week> weeks;
     private final ModelParameters parameters;
+    private final List<WeekMetrics> figures;
     private final Map<String, Exercise> exercises = new HashMap<>();
     private final Map<Exercise, List<Muscle>> primeMovers = new IdentityHashMap<>();
     private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
     private Map<Integer, Week> weeksByNumber;
+    private SetSummary sets;
 
-    FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters) {
+    FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
         this.catalogue = catalogue;
         this.weeks = weeks;
         this.parameters = parameters;
+        this.figures = figures;
+    }
+
+    /**
+     * What any of the model's working sets has, found in one walk for the rules that judge a kind of set only:
+     * a rule whose kind of set the programme never writes has nothing to look at.
+     *
+     * @param effortUnstated a set states no effort (no rir, rpe, load, AMRAP, hold, carry or test)
+     * @param effortConflict a set's stated effort and load disagree ({@code EffortAgreement.isConflict})
+     * @param technique      a set uses a technique (drop set, rest-pause)
+     */
+    public record SetSummary(boolean effortUnstated, boolean effortConflict, boolean technique) {
+    }
+
+    /** The summary of every working set in the model's figures, made on first use. */
+    public SetSummary sets() {
+        if (sets == null) {
+            boolean unstated = false;
+            boolean conflict = false;
+            boolean technique = false;
+            for (WeekMetrics week : figures) {
+                for (SessionMetrics session : week.sessions()) {
+                    for (SetMetrics set : session.sets()) {
+                        unstated |= !set.prescription().statesEffort();
+                        conflict |= set.agreement().isConflict();
+                        technique |= set.prescription().technique().isPresent();
+                    }
+                }
+            }
+            sets = new SetSummary(unstated, conflict, technique);
+        }
+        return sets;
     }
 
     /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */

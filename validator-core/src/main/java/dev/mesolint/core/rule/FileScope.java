@@ -29,6 +29,7 @@ public final class FileScope {
 
     private final ProgrammeMetrics metrics;
     private FileIndex index;
+    private Anchors.Paths paths;
 
     public FileScope(String displayPath, Programme programme, Catalogue catalogue, LocatedDocument document,
             String profileName, ProgrammeMetrics metrics) {
@@ -67,27 +68,41 @@ public final class FileScope {
     /** The lookups rules share in this file, made on first use. */
     public FileIndex index() {
         if (index == null) {
-            index = new FileIndex(catalogue, programme.weeks(), metrics.parameters());
+            index = new FileIndex(catalogue, programme.weeks(), metrics.parameters(), metrics.weeks());
         }
         return index;
     }
 
     /** The anchor of a finding at {@code location}: this programme's id and the node's logical path. */
     public Anchor anchor(Location location) {
-        return Anchors.of(document, programme.info().id(), displayPath, location.pointer());
+        if (paths == null && document != null) {
+            paths = new Anchors.Paths(document.root());
+        }
+        return Anchors.of(paths, programme.info().id(), displayPath, location.pointer());
     }
 
     /** Records a finding, waived when a waiver at its place (or for the whole file) names its rule. */
     void add(Finding finding, List<Waiver> waivers) {
-        Waiver match = waivers.stream().filter(w -> w.covers(finding.ruleId())).findFirst()
-                .or(() -> programme.fileWaivers().stream().filter(w -> w.covers(finding.ruleId())).findFirst())
-                .orElse(null);
+        Waiver match = covering(waivers, finding.ruleId());
+        if (match == null) {
+            match = covering(programme.fileWaivers(), finding.ruleId());
+        }
         if (match != null) {
             used.add(match);
             findings.add(finding.waivedBy(match));
         } else {
             findings.add(finding);
         }
+    }
+
+    /** The first of {@code waivers} that names {@code ruleId}; null when none does. */
+    private static Waiver covering(List<Waiver> waivers, String ruleId) {
+        for (Waiver w : waivers) {
+            if (w.covers(ruleId)) {
+                return w;
+            }
+        }
+        return null;
     }
 
     public List<Finding> findings() {

@@ -12,7 +12,9 @@ import dev.mesolint.core.programme.SetPrescription;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.source.Location;
 import dev.mesolint.core.yaml.Pointers;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -22,6 +24,7 @@ public final class RuleContext {
     private final FileScope file;
     private final RuleMetadata rule;
     private final RuleSettings settings;
+    private Map<String, String> shown;
 
     public RuleContext(FileScope file, RuleMetadata rule, RuleSettings settings) {
         this.file = file;
@@ -67,7 +70,16 @@ public final class RuleContext {
 
     /** A parameter as a profile would write it, for messages: {@code 2min}, {@code 30%}. */
     public String shown(String name) {
-        return rule.parameter(name).map(p -> p.format(param(name))).orElseThrow();
+        if (shown == null) {
+            shown = new HashMap<>();
+        }
+        // Asked for by every finding's message: formatted once per rule and file.
+        String text = shown.get(name);
+        if (text == null) {
+            text = rule.parameter(name).map(p -> p.format(param(name))).orElseThrow();
+            shown.put(name, text);
+        }
+        return text;
     }
 
     /** Reports a finding about {@code subject}; the waivers in force there are applied. */
@@ -123,7 +135,7 @@ public final class RuleContext {
             return set.placeOf(key);
         }
         String candidate = Pointers.child(subject.location().pointer(), key);
-        Location l = file.document().values().get(candidate);
+        Location l = file.document().writtenAt(candidate);
         return l == null ? subject.location() : l.withPointer(candidate);
     }
 }

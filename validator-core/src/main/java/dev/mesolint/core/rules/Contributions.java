@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
@@ -19,7 +20,8 @@ final class Contributions {
         Map<String, Double> credited = new LinkedHashMap<>();
         for (SessionMetrics session : sessions) {
             for (SetMetrics set : session.sets()) {
-                double credit = context.exercise(set.exerciseId()).map(e -> e.credit(muscle)).orElse(0.0);
+                Exercise exercise = context.exerciseOrNull(set.exerciseId());
+                double credit = exercise == null ? 0.0 : exercise.credit(muscle);
                 if (set.hard() && credit > 0) {
                     credited.merge(set.exerciseId(), credit, Double::sum);
                 }

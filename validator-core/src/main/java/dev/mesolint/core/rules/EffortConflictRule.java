@@ -69,6 +69,9 @@ public final class EffortConflictRule implements Rule {
 
     @Override
     public void check(RuleContext context) {
+        if (!context.index().sets().effortConflict()) {
+            return;
+        }
         OneRepMaxRelation relation = context.metrics().parameters().oneRepMaxRelation();
         Occurrences.SetHits<Optional<RisingOneRepMax.Reading>> groups = new Occurrences.SetHits<>();
         OutOfDateOneRepMax outOfDate = new OutOfDateOneRepMax(context, relation);

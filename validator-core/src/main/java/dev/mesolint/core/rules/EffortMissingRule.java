@@ -32,6 +32,9 @@ public final class EffortMissingRule implements Rule {
 
     @Override
     public void check(RuleContext context) {
+        if (!context.index().sets().effortUnstated()) {
+            return;
+        }
         Occurrences.SetHits<SetMetrics> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {

@@ -16,7 +16,6 @@ import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
 import java.util.EnumSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -81,6 +80,9 @@ public final class FatigueTechniqueRule implements Rule {
     }
 
     private static void reportTechniques(RuleContext context, Occurrences found) {
+        if (!context.index().sets().technique()) {
+            return;
+        }
         Occurrences.SetHits<Followed> groups = new Occurrences.SetHits<>();
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
@@ -119,8 +121,13 @@ public final class FatigueTechniqueRule implements Rule {
 
     /** The first of {@code later} whose exercise credits {@code muscle}. */
     private static Optional<SetMetrics> nextFor(RuleContext context, List<SetMetrics> later, Muscle muscle) {
-        return later.stream().filter(s -> context.exercise(s.exerciseId()).map(e -> e.credit(muscle) > 0)
-                .orElse(false)).findFirst();
+        for (SetMetrics s : later) {
+            Exercise exercise = context.exerciseOrNull(s.exerciseId());
+            if (exercise != null && exercise.credit(muscle) > 0) {
+                return Optional.of(s);
+            }
+        }
+        return Optional.empty();
     }
 
     /**
@@ -146,11 +153,10 @@ public final class FatigueTechniqueRule implements Rule {
 
     private static Set<Muscle> primeMovers(RuleContext context, ExerciseWork work) {
         Set<Muscle> movers = EnumSet.noneOf(Muscle.class);
-        context.exercise(work.exerciseId()).map(Exercise::muscles).orElse(Map.of()).forEach((m, credit) -> {
-            if (credit >= Exercise.PRIME_MOVER) {
-                movers.add(m);
-            }
-        });
+        Exercise exercise = context.exerciseOrNull(work.exerciseId());
+        if (exercise != null) {
+            movers.addAll(context.index().primeMovers(exercise));
+        }
         return movers;
     }
 }

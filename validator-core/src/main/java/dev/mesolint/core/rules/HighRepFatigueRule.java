@@ -121,7 +121,8 @@ public final class HighRepFatigueRule implements Rule {
     }
 
     private static boolean compound(RuleContext context, SetMetrics set) {
-        return context.exercise(set.exerciseId()).map(Exercise::isCompound).orElse(false);
+        Exercise exercise = context.exerciseOrNull(set.exerciseId());
+        return exercise != null && exercise.isCompound();
     }
 
     private static void add(RuleContext context, Occurrences found, Hits hits, double maxRir) {

@@ -83,7 +83,8 @@ public final class LowYieldSetRule implements Rule {
     private static int earlier(RuleContext context, List<SetMetrics> sets, int index, Muscle muscle) {
         int count = 0;
         for (int i = 0; i < index; i++) {
-            if (context.exercise(sets.get(i).exerciseId()).map(e -> e.credit(muscle) > 0).orElse(false)) {
+            Exercise exercise = context.exerciseOrNull(sets.get(i).exerciseId());
+            if (exercise != null && exercise.credit(muscle) > 0) {
                 count++;
             }
         }

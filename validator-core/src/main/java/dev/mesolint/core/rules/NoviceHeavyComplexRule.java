@@ -66,8 +66,8 @@ public final class NoviceHeavyComplexRule implements Rule {
         for (WeekMetrics week : context.metrics().weeks()) {
             for (SessionMetrics session : week.sessions()) {
                 for (SetMetrics set : session.sets()) {
-                    boolean highSkill = context.exercise(set.exerciseId()).map(Exercise::skill)
-                            .filter(s -> s == Skill.HIGH).isPresent();
+                    Exercise exercise = context.exerciseOrNull(set.exerciseId());
+                    boolean highSkill = exercise != null && exercise.skill() == Skill.HIGH;
                     boolean stale = staleOneRepMax(set);
                     if (!highSkill || !set.effortKnown() || stale && set.effortSource() == EffortSource.LOAD) {
                         continue;

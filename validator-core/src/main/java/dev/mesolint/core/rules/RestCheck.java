@@ -14,6 +14,8 @@ import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.Durations;
+import java.util.HashMap;
+import java.util.Map;
 import java.util.function.BiFunction;
 
 /**
@@ -34,6 +36,7 @@ final class RestCheck {
      */
     static void check(RuleContext context, BiFunction<ExerciseWork, Exercise, Limit> limitFor) {
         Occurrences found = new Occurrences();
+        Map<Said, Wording> wordings = new HashMap<>();
         for (Week week : context.programme().weeks()) {
             for (Session session : week.sessions()) {
                 if (!mayRestTooShort(context, session, limitFor)) {
@@ -51,7 +54,7 @@ final class RestCheck {
                     double rest = gap.seconds().getAsDouble();
                     double min = context.param(limit.parameter());
                     if (rest < min) {
-                        report(context, found, week, session, gap, limit, rest, min);
+                        report(context, found, wordings, week, session, gap, limit, rest, min);
                     }
                 }
             }
@@ -97,24 +100,43 @@ final class RestCheck {
         return limit == null ? 0 : context.param(limit.parameter());
     }
 
-    private static void report(RuleContext context, Occurrences found, Week week, Session session, RestGap gap,
-            Limit limit, double rest, double min) {
-        double changeovers = gap.changeoverSeconds();
-        String detail = "rest " + Texts.seconds(rest) + (changeovers == 0 ? ""
-                : " (" + Texts.seconds(rest - changeovers) + " after the round + " + Texts.seconds(changeovers)
-                        + " of changeovers)")
-                + ", the " + context.profileName() + " profile asks for at least " + Texts.seconds(min) + " after "
-                + limit.after();
-        String fix = "rest: " + context.shown(limit.parameter())
-                + (gap.superset().isPresent() ? " on the superset, the rest after each round" : "");
-        Location where = gap.superset().map(s -> context.fieldLocation(s, "rest"))
-                .orElseGet(() -> context.fieldLocation(gap.set(), "rest"));
+    /**
+     * What decides a short rest's words: the place its fix edits, the rest, its changeovers, the limit and whether
+     * it is a superset's rest after a round.
+     */
+    private record Said(Location where, double rest, double changeovers, Limit limit, boolean superset) {
+    }
+
+    /** A short rest's words, made once for the weeks that repeat it. */
+    private record Wording(String detail, String fix, Facts facts) {
+    }
+
+    private static void report(RuleContext context, Occurrences found, Map<Said, Wording> wordings, Week week,
+            Session session, RestGap gap, Limit limit, double rest, double min) {
+        Location where = gap.superset().isPresent() ? context.fieldLocation(gap.superset().get(), "rest")
+                : context.fieldLocation(gap.set(), "rest");
+        Wording wording = wordings.computeIfAbsent(new Said(where, rest, gap.changeoverSeconds(), limit,
+                gap.superset().isPresent()), said -> wording(context, said, min));
         String noun = gap.superset().isPresent() ? "round" : "set";
         String label = gap.position() + " -> "
                 + gap.following().map(RestCheck::name).orElse(Integer.toString(gap.position() + 1));
         found.add(week, session, gap.work().exerciseId(), where, gap.set().waivers(), new Occurrences.Step(noun, label),
-                detail, fix, Facts.NONE.measured(rest, min, "s").withEdit(Edits.set(where, "rest",
-                        context.shown(limit.parameter())).orElse(null)));
+                wording.detail(), wording.fix(), wording.facts());
+    }
+
+    private static Wording wording(RuleContext context, Said said, double min) {
+        double rest = said.rest();
+        double changeovers = said.changeovers();
+        String detail = "rest " + Texts.seconds(rest) + (changeovers == 0 ? ""
+                : " (" + Texts.seconds(rest - changeovers) + " after the round + " + Texts.seconds(changeovers)
+                        + " of changeovers)")
+                + ", the " + context.profileName() + " profile asks for at least " + Texts.seconds(min) + " after "
+                + said.limit().after();
+        String fix = "rest: " + context.shown(said.limit().parameter())
+                + (said.superset() ? " on the superset, the rest after each round" : "");
+        Facts facts = Facts.NONE.measured(rest, min, "s").withEdit(Edits.set(said.where(), "rest",
+                context.shown(said.limit().parameter())).orElse(null));
+        return new Wording(detail, fix, facts);
     }
 
     private static String name(WorkItem item) {

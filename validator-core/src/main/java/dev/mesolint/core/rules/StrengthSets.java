@@ -45,7 +45,8 @@ final class StrengthSets {
     }
 
     static boolean ballistic(RuleContext context, String exerciseId) {
-        return context.exercise(exerciseId).map(Exercise::ballistic).orElse(false);
+        Exercise exercise = context.exerciseOrNull(exerciseId);
+        return exercise != null && exercise.ballistic();
     }
 
     private static boolean strengthPurpose(RuleContext context, SetMetrics set) {

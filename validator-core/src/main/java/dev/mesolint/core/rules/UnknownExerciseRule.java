@@ -40,7 +40,7 @@ public final class UnknownExerciseRule implements Rule {
             week.sessions().forEach(session -> session.work().forEach(item -> check(context, item, reported)));
         }
         context.programme().athlete().constraints().forEach(c -> c.avoid().stream()
-                .filter(id -> context.exercise(id).isEmpty())
+                .filter(id -> context.exerciseOrNull(id) == null)
                 .forEach(id -> context.report(c.location(), List.of(), context.severity(),
                         "constraint names unknown exercise '" + id + "'" + suggestion(context, id),
                         fix(context, id), Facts.about(Subject.exercise(id)))));
@@ -52,7 +52,7 @@ public final class UnknownExerciseRule implements Rule {
             return;
         }
         ExerciseWork work = (ExerciseWork) item;
-        if (context.exercise(work.exerciseId()).isEmpty() && reported.add(work.exerciseLocation().pointer())) {
+        if (context.exerciseOrNull(work.exerciseId()) == null && reported.add(work.exerciseLocation().pointer())) {
             List<String> closest = context.catalogue().closest(work.exerciseId(), 1);
             Facts facts = Facts.about(Subject.exercise(work.exerciseId()));
             context.report(work.exerciseLocation(), work.waivers(), context.severity(),

@@ -10,7 +10,9 @@ import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.commons.text.similarity.LevenshteinDistance;
 
@@ -40,22 +42,32 @@ public final class UnstableSurfaceRule implements Rule {
     @Override
     public void check(RuleContext context) {
         Occurrences found = new Occurrences();
+        // Repeated weeks visit the same exercise again: word its finding once (the alternative is a catalogue search).
+        Map<Exercise, Wording> wordings = new IdentityHashMap<>();
         ExerciseVisits.each(context.programme(), (week, session, work, superset) -> {
-            Optional<Exercise> exercise = context.exercise(work.exerciseId());
-            if (exercise.isEmpty() || exercise.get().stability() != Stability.UNSTABLE) {
+            Exercise e = context.exerciseOrNull(work.exerciseId());
+            if (e == null || e.stability() != Stability.UNSTABLE) {
                 return;
             }
-            Exercise e = exercise.get();
-            String target = e.primeMover().map(Muscle::yamlName).orElse("the target muscle");
+            Wording wording = wordings.computeIfAbsent(e, x -> wording(context, x));
             found.add(week, session, e.id(), work.exerciseLocation(), work.waivers(), Occurrences.Step.NONE,
-                    "done on an unstable surface (catalogue stability: unstable): balance demand caps how hard "
-                            + target + " can be driven, so the " + context.profileName() + " profile reports it as "
-                            + "low-yield for hypertrophy and strength",
-                    stableAlternative(context, e).map(id -> "use a stable version such as " + id).orElse(
-                            "use a stable version of the movement")
-                            + ", or waive this rule with the reason if balance work is the aim");
+                    wording.detail(), wording.fix());
         });
         found.report(context);
+    }
+
+    /** What a finding on an exercise says, and its fix. */
+    private record Wording(String detail, String fix) {
+    }
+
+    private static Wording wording(RuleContext context, Exercise e) {
+        String target = e.primeMover().map(Muscle::yamlName).orElse("the target muscle");
+        return new Wording("done on an unstable surface (catalogue stability: unstable): balance demand caps how hard "
+                + target + " can be driven, so the " + context.profileName() + " profile reports it as "
+                + "low-yield for hypertrophy and strength",
+                stableAlternative(context, e).map(id -> "use a stable version such as " + id).orElse(
+                        "use a stable version of the movement")
+                        + ", or waive this rule with the reason if balance work is the aim");
     }
 
     /**

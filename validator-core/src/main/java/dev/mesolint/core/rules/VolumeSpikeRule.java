@@ -14,10 +14,7 @@ import dev.mesolint.core.rule.RuleContext;
 import dev.mesolint.core.rule.RuleMetadata;
 import dev.mesolint.core.rule.RuleParameter;
 import java.util.ArrayList;
-import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 
 /**
  * A muscle's weekly working sets jump well above what the weeks before got it used to.
@@ -27,6 +24,7 @@ import java.util.Optional;
  */
 public final class VolumeSpikeRule implements Rule {
     public static final String ID = "volume-spike";
+    private static final Muscle[] MUSCLES = Muscle.values();
     static final String MAX_RATIO = "max-ratio";
     static final String MIN_ADDED_SETS = "min-added-sets";
     static final String MIN_BASELINE_WEEKS = "min-baseline-weeks";
@@ -76,32 +74,52 @@ public final class VolumeSpikeRule implements Rule {
         int window = context.metrics().parameters().acuteChronicWeeks();
         int minWeeks = (int) context.param(MIN_BASELINE_WEEKS);
         List<WeekMetrics> weeks = context.metrics().weeks();
-        List<Map<Muscle, Integer>> sets = weeks.stream().map(w -> directSets(context, w)).toList();
+        List<int[]> sets = new ArrayList<>(weeks.size());
+        for (WeekMetrics week : weeks) {
+            sets.add(directSets(context, week));
+        }
         for (int i = 1; i < weeks.size(); i++) {
             WeekMetrics week = weeks.get(i);
             List<Integer> before = baseline(weeks, i, window);
             if (week.deload() || before.size() < Math.min(minWeeks, window)) {
                 continue;
             }
-            for (Map.Entry<Muscle, Integer> e : sets.get(i).entrySet()) {
-                Muscle muscle = e.getKey();
-                double chronic = before.stream().mapToInt(b -> sets.get(b).getOrDefault(muscle, 0)).average()
-                        .orElse(0);
-                double now = e.getValue();
-                if (chronic == 0 || now / chronic <= maxRatio || now - chronic < minAdded) {
-                    continue;
+            int[] now = sets.get(i);
+            for (Muscle muscle : MUSCLES) {
+                if (now[muscle.ordinal()] > 0) {
+                    check(context, weeks, sets, week, before, muscle, now[muscle.ordinal()], maxRatio, minAdded);
                 }
-                String name = Texts.muscle(muscle);
-                Places.reportWeek(context, week, name + ", week " + week.number() + ": " + Texts.num(now)
-                        + " working sets with " + name + " as prime mover, " + Texts.num(now / chronic)
-                        + " x the mean of " + Texts.weeks(before.stream().map(b -> weeks.get(b).number()).toList()) + " (" + Texts.num(chronic) + "); the "
-                        + context.profileName() + " profile flags weeks over " + context.shown(MAX_RATIO)
-                        + " x that mean",
-                        "raise " + name + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
-                                + " working sets this week",
-                        Facts.about(Subject.muscle(name)).measured(now, Math.floor(chronic * maxRatio), "sets"));
             }
         }
+    }
+
+    private static void check(RuleContext context, List<WeekMetrics> weeks, List<int[]> sets, WeekMetrics week,
+            List<Integer> before, Muscle muscle, double now, double maxRatio, double minAdded) {
+        double chronic = mean(sets, before, muscle);
+        if (chronic == 0 || now / chronic <= maxRatio || now - chronic < minAdded) {
+            return;
+        }
+        String name = Texts.muscle(muscle);
+        Places.reportWeek(context, week, name + ", week " + week.number() + ": " + Texts.num(now)
+                + " working sets with " + name + " as prime mover, " + Texts.num(now / chronic)
+                + " x the mean of " + Texts.weeks(before.stream().map(b -> weeks.get(b).number()).toList()) + " ("
+                + Texts.num(chronic) + "); the " + context.profileName() + " profile flags weeks over "
+                + context.shown(MAX_RATIO) + " x that mean",
+                "raise " + name + " volume in steps: at most " + Texts.num(Math.floor(chronic * maxRatio))
+                        + " working sets this week",
+                Facts.about(Subject.muscle(name)).measured(now, Math.floor(chronic * maxRatio), "sets"));
+    }
+
+    /** The mean working sets of {@code muscle} over the baseline weeks; 0 for no weeks. */
+    private static double mean(List<int[]> sets, List<Integer> weeks, Muscle muscle) {
+        if (weeks.isEmpty()) {
+            return 0;
+        }
+        long sum = 0;
+        for (int b : weeks) {
+            sum += sets.get(b)[muscle.ordinal()];
+        }
+        return (double) sum / weeks.size();
     }
 
     /** Indexes of up to {@code window} non-deload weeks before week {@code i}, nearest last. */
@@ -115,17 +133,20 @@ public final class VolumeSpikeRule implements Rule {
         return before;
     }
 
-    /** Working sets per muscle in the week, counting each set for the muscles its exercise has as prime movers. */
-    private static Map<Muscle, Integer> directSets(RuleContext context, WeekMetrics week) {
-        Map<Muscle, Integer> sets = new EnumMap<>(Muscle.class);
+    /**
+     * Working sets per muscle (by ordinal) in the week, counting each set for the muscles its exercise has as prime
+     * movers.
+     */
+    private static int[] directSets(RuleContext context, WeekMetrics week) {
+        int[] sets = new int[MUSCLES.length];
         for (SessionMetrics session : week.sessions()) {
             for (SetMetrics set : session.sets()) {
-                Optional<Exercise> exercise = context.exercise(set.exerciseId());
-                exercise.ifPresent(x -> x.muscles().forEach((muscle, credit) -> {
-                    if (credit >= 1) {
-                        sets.merge(muscle, 1, Integer::sum);
+                Exercise exercise = context.exerciseOrNull(set.exerciseId());
+                if (exercise != null) {
+                    for (Muscle muscle : context.index().primeMovers(exercise)) {
+                        sets[muscle.ordinal()]++;
                     }
-                }));
+                }
             }
         }
         return sets;

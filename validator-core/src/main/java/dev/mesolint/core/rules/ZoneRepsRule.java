@@ -1,5 +1,6 @@
 package dev.mesolint.core.rules;
 
+import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.finding.Severity;
 import dev.mesolint.core.model.IntensityZone;
@@ -121,8 +122,13 @@ public final class ZoneRepsRule implements Rule {
 
     /** The table describes competition lifts: a lift's sets count where its entry's role is main. */
     private static boolean mainLift(RuleContext context, SessionMetrics session, String lift) {
-        return session.sets().stream().filter(s -> s.exerciseId().equals(lift)).findFirst()
-                .flatMap(s -> context.exercise(lift).map(e -> s.work().role(e) == Role.MAIN)).orElse(false);
+        for (SetMetrics s : session.sets()) {
+            if (s.exerciseId().equals(lift)) {
+                Exercise exercise = context.exerciseOrNull(lift);
+                return exercise != null && s.work().role(exercise) == Role.MAIN;
+            }
+        }
+        return false;
     }
 
     /** -1 under the zone's range, 1 over it, 0 within it or not trained. */

@@ -41,7 +41,7 @@ public record RepTarget(int min, int max, boolean amrap) {
         if (s.equalsIgnoreCase("amrap")) {
             return AMRAP;
         }
-        if (s.matches("\\d+")) {
+        if (WholeNumbers.digitsOnly(s)) {
             return exactly(checked(text, WholeNumbers.parse(s, Integer.MAX_VALUE, text, HINT)));
         }
         Matcher floor = AT_LEAST.matcher(s);

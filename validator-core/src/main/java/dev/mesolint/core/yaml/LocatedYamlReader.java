@@ -12,16 +12,16 @@ import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.HashMap;
-import java.util.Iterator;
-import java.util.Map;
+import java.util.NoSuchElementException;
 import org.yaml.snakeyaml.LoaderOptions;
-import org.yaml.snakeyaml.Yaml;
-import org.yaml.snakeyaml.constructor.SafeConstructor;
+import org.yaml.snakeyaml.composer.Composer;
 import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 import org.yaml.snakeyaml.error.YAMLException;
 import org.yaml.snakeyaml.nodes.Node;
+import org.yaml.snakeyaml.parser.ParserImpl;
+import org.yaml.snakeyaml.reader.StreamReader;
+import org.yaml.snakeyaml.resolver.Resolver;
 
 /**
  * Reads one YAML file safely into a {@link LocatedDocument}: size and text checks first, then SnakeYAML's composer
@@ -32,6 +32,9 @@ import org.yaml.snakeyaml.nodes.Node;
 public final class LocatedYamlReader {
     static final String SYNTAX_HINT = "check the indentation (spaces, not tabs), that every 'key: value' has a space "
             + "after the colon, and quote values that contain ': ' or ' #'";
+
+    /** SnakeYAML's default resolver; only read after it is built, so one serves every thread. */
+    private static final Resolver RESOLVER = new Resolver();
 
     private final YamlLimits limits;
 
@@ -76,19 +79,17 @@ public final class LocatedYamlReader {
 
     public LocatedDocument read(String text) throws YamlProblem {
         LoaderOptions options = loaderOptions();
-        Iterator<Node> documents;
         Node root;
         try {
-            documents = new Yaml(new SafeConstructor(options)).composeAll(new StringReader(text)).iterator();
-            if (!documents.hasNext()) {
+            // The composer alone, as Yaml.composeAll builds it: nodes only, no object is ever constructed.
+            Composer documents = new Composer(new ParserImpl(new StreamReader(new StringReader(text)), options),
+                    RESOLVER, options);
+            if (!documents.checkNode()) {
                 throw empty();
             }
-            root = documents.next();
-            if (root == null) {
-                throw empty();
-            }
-            if (documents.hasNext()) {
-                Node second = documents.next();
+            root = next(documents);
+            if (documents.checkNode()) {
+                Node second = next(documents);
                 throw new YamlProblem("the file holds more than one YAML document",
                         "keep one programme per file and remove the '---' separator", at(second.getStartMark()));
             }
@@ -100,7 +101,15 @@ public final class LocatedYamlReader {
             throw new YamlProblem("the file nests too deeply to read", "keep nesting under " + limits.maxDepth()
                     + " levels", Location.START);
         }
-        return new TreeBuilder(limits).build(root);
+        return new NodeConverter(limits).document(root);
+    }
+
+    private static Node next(Composer composer) {
+        Node node = composer.getNode();
+        if (node == null) {
+            throw new NoSuchElementException("No Node is available.");
+        }
+        return node;
     }
 
     private LoaderOptions loaderOptions() {
@@ -130,7 +139,18 @@ public final class LocatedYamlReader {
                         "remove it from the programme folder or give it another extension", Location.START);
             }
         }
-        return decodeStrictly(bytes, StandardCharsets.UTF_8);
+        // Plain ASCII (most programmes) is valid UTF-8 as it stands and needs no decoder.
+        return ascii(bytes) ? new String(bytes, StandardCharsets.US_ASCII)
+                : decodeStrictly(bytes, StandardCharsets.UTF_8);
+    }
+
+    private static boolean ascii(byte[] bytes) {
+        for (byte b : bytes) {
+            if (b < 0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** UTF-32 or UTF-16 when the file starts with its byte-order mark (YAML 1.2 allows both), else null. */
@@ -205,21 +225,5 @@ public final class LocatedYamlReader {
 
     static Location at(Mark mark) {
         return mark == null ? Location.START : new Location(mark.getLine() + 1, mark.getColumn() + 1, "");
-    }
-
-    /** Converts composed nodes to a JSON tree, recording where each node was written. */
-    private static final class TreeBuilder {
-        private final YamlLimits limits;
-        private final Map<String, Location> values = new HashMap<>();
-        private final Map<String, Location> keys = new HashMap<>();
-
-        TreeBuilder(YamlLimits limits) {
-            this.limits = limits;
-        }
-
-        LocatedDocument build(Node root) throws YamlProblem {
-            var tree = new NodeConverter(limits, values, keys).convert(root, "", 0);
-            return new LocatedDocument(tree, Map.copyOf(values), Map.copyOf(keys));
-        }
     }
 }

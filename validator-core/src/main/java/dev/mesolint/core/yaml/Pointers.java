@@ -6,11 +6,15 @@ public final class Pointers {
     }
 
     public static String child(String parent, String key) {
-        return parent + "/" + key.replace("~", "~0").replace("/", "~1");
+        return parent + "/" + escape(key);
     }
 
     public static String child(String parent, int index) {
         return parent + "/" + index;
+    }
+
+    private static String escape(String key) {
+        return key.indexOf('~') < 0 && key.indexOf('/') < 0 ? key : key.replace("~", "~0").replace("/", "~1");
     }
 
     /** A readable path for messages: {@code /weeks/0/sessions/1} becomes {@code weeks[0].sessions[1]}. */
@@ -36,5 +40,42 @@ public final class Pointers {
     /** The last segment of a pointer: the property name or index. */
     public static String lastSegment(String pointer) {
         return pointer.substring(pointer.lastIndexOf('/') + 1).replace("~1", "/").replace("~0", "~");
+    }
+
+    /** Whether the segment {@code pointer[from, to)} is {@code name} as {@link #child(String, String)} escapes it. */
+    static boolean segmentNames(String pointer, int from, int to, String name) {
+        int at = from;
+        for (int i = 0; i < name.length(); i++) {
+            char c = name.charAt(i);
+            if (c == '~' || c == '/') {
+                if (at + 2 > to || pointer.charAt(at) != '~' || pointer.charAt(at + 1) != (c == '~' ? '0' : '1')) {
+                    return false;
+                }
+                at += 2;
+            } else {
+                if (at >= to || pointer.charAt(at) != c) {
+                    return false;
+                }
+                at++;
+            }
+        }
+        return at == to;
+    }
+
+    /** The list index written as {@code pointer[from, to)} the way {@link #child(String, int)} writes it, else -1. */
+    static int index(String pointer, int from, int to) {
+        int digits = to - from;
+        if (digits < 1 || digits > 9 || (digits > 1 && pointer.charAt(from) == '0')) {
+            return -1;
+        }
+        int value = 0;
+        for (int i = from; i < to; i++) {
+            char c = pointer.charAt(i);
+            if (c < '0' || c > '9') {
+                return -1;
+            }
+            value = value * 10 + (c - '0');
+        }
+        return value;
     }
 }

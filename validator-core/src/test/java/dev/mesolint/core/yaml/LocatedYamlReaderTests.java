@@ -34,6 +34,66 @@ class LocatedYamlReaderTests {
     }
 
     @Test
+    void pointersFindEscapedKeysAndStopAtTheNearestWrittenAncestor() throws YamlProblem {
+        LocatedDocument doc = reader.read("""
+                "a/b": 1
+                "c~d":
+                  - x
+                  - y: 2
+                """);
+        // RFC 6901: '/' in a key is written ~1 and '~' is written ~0
+        assertEquals(new Location(1, 8, 1, 9, "/a~1b"), doc.valueAt("/a~1b"));
+        assertEquals(new Location(1, 1, 1, 6, "/a~1b"), doc.keyAt("/a~1b"));
+        // a block mapping starts at its first key
+        assertEquals("4:5 /c~0d/1", doc.valueAt("/c~0d/1") + " " + doc.valueAt("/c~0d/1").pointer());
+        assertEquals(new Location(4, 5, 4, 6, "/c~0d/1/y"), doc.keyAt("/c~0d/1/y"));
+        // unescaped or unknown segments are not the keys: the walk stops at the last node it found, and says which
+        assertEquals("", doc.valueAt("/a/b").pointer());
+        assertEquals("/c~0d", doc.valueAt("/c~0d/7").pointer());
+        assertEquals("/c~0d", doc.valueAt("/c~0d/01").pointer());
+        assertEquals("/c~0d/1", doc.valueAt("/c~0d/1/z").pointer());
+        // a list element has no key: its key is where its value is
+        assertEquals(doc.valueAt("/c~0d/0"), doc.keyAt("/c~0d/0"));
+        // only a written value is found exactly
+        assertEquals(doc.valueAt("/c~0d/1/y"), doc.writtenAt("/c~0d/1/y"));
+        assertEquals(null, doc.writtenAt("/c~0d/1/z"));
+        JsonNode list = doc.root().get("c~d");
+        assertEquals(doc.valueAt("/c~0d/1"), doc.childAt(list, 1, "/c~0d/1"));
+        assertEquals(doc.valueAt("/c~0d/1/y"), doc.childAt(list.get(1), "y", "/c~0d/1/y"));
+        assertEquals(null, doc.childAt(list, 2, "/c~0d/2"));
+    }
+
+    @Test
+    void onlyYaml12NumbersAreNumbers() throws YamlProblem {
+        JsonNode root = reader.read("""
+                a: -0
+                b: +12
+                c: 1.
+                d: .5e-3
+                e: 1.5E+2
+                f: 0x1F
+                g: 1_000
+                h: .
+                i: 1e5
+                j: '-5'
+                k: 123456789012345678901
+                """).root();
+        // YAML 1.2 core schema, integers [-+]?(0|[1-9][0-9]*) and floats with a point (yaml.org/spec/1.2.2, 10.3.2)
+        assertEquals(0, root.get("a").asLong());
+        assertEquals(12, root.get("b").asLong());
+        assertTrue(root.get("c").isNumber());
+        assertEquals(0.0005, root.get("d").asDouble(), 1e-12);
+        assertEquals(150, root.get("e").asDouble(), 1e-9);
+        assertTrue(root.get("f").isString());
+        assertTrue(root.get("g").isString());
+        assertTrue(root.get("h").isString());
+        // the decimal form needs its point: 1e5 stays text
+        assertTrue(root.get("i").isString());
+        assertTrue(root.get("j").isString());
+        assertEquals("123456789012345678901", root.get("k").bigIntegerValue().toString());
+    }
+
+    @Test
     void yaml11SurprisesStayTheTextTheAuthorWrote() throws YamlProblem {
         JsonNode root = reader.read("""
                 rest: 2:30
