@@ -33,8 +33,8 @@ public final class LocatedYamlReader {
     static final String SYNTAX_HINT = "check the indentation (spaces, not tabs), that every 'key: value' has a space "
             + "after the colon, and quote values that contain ': ' or ' #'";
 
-    /** SnakeYAML's default resolver; only read after it is built, so one serves every thread. */
-    private static final Resolver RESOLVER = new Resolver();
+    /** Leaves plain scalars to the converter's own typing; holds no state, so one serves every thread. */
+    private static final Resolver RESOLVER = new PlainScalarResolver();
 
     private final YamlLimits limits;
 

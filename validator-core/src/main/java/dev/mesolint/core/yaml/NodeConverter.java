@@ -82,10 +82,10 @@ final class NodeConverter {
         return mapping((MappingNode) node, depth);
     }
 
-    // The resolver hands out Tag's own constants; anything else is compared by value.
+    // The resolver hands out its own and Tag's constants; anything else is compared by value.
     private static boolean standard(Tag tag) {
-        return tag == Tag.STR || tag == Tag.MAP || tag == Tag.SEQ || tag == Tag.INT || tag == Tag.FLOAT
-                || tag == Tag.NULL || tag == Tag.BOOL || STANDARD.contains(tag);
+        return tag == PlainScalarResolver.PLAIN || tag == Tag.STR || tag == Tag.MAP || tag == Tag.SEQ
+                || tag == Tag.INT || tag == Tag.FLOAT || tag == Tag.NULL || tag == Tag.BOOL || STANDARD.contains(tag);
     }
 
     private static boolean merge(Tag tag) {
