@@ -53,8 +53,9 @@ public final class Checker {
         this.request = request;
         this.rules = List.copyOf(rules);
         this.reader = new LocatedYamlReader(request.limits());
-        this.programmeSchema = FormatSchema.load(FormatSchema.PROGRAMME);
+        // The catalogue's schema first: the programme's may still be compiling in the background (CheckRun).
         CatalogueReader catalogues = new CatalogueReader(reader, FormatSchema.load(FormatSchema.CATALOGUE));
+        this.programmeSchema = FormatSchema.load(FormatSchema.PROGRAMME);
         Catalogue combined = catalogues.builtIn();
         List<FileReport> problems = new ArrayList<>();
         for (Path extra : request.extraCatalogues()) {

@@ -11,6 +11,7 @@ import dev.mesolint.core.engine.DuplicateProgrammeIds;
 import dev.mesolint.core.engine.ProgrammeFiles;
 import dev.mesolint.core.engine.RunReport;
 import dev.mesolint.core.engine.Workspace;
+import dev.mesolint.core.format.FormatSchema;
 import dev.mesolint.core.report.ModelFigures;
 import dev.mesolint.core.report.PackedFigures;
 import dev.mesolint.core.report.ReportFigures;
@@ -42,6 +43,11 @@ public final class CheckRun {
      * @throws IOException   the programmes cannot be listed or read at all
      */
     public static RunResult run(RunRequest request, List<RuleDefinition> rules) throws ConfigProblem, IOException {
+        if (request.cacheFile().isEmpty()) {
+            // Every file will be checked: compile the programme schema while the configuration is read. (With a
+            // cache, the schema may never be needed.)
+            FormatSchema.prepare(FormatSchema.PROGRAMME);
+        }
         Workspace workspace = Workspace.open(request.options(), rules);
         List<Path> inputs = request.inputs();
         Optional<ChangedProgrammes.Selection> selection = Optional.empty();
