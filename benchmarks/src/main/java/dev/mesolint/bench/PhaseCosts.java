@@ -55,11 +55,11 @@ public final class PhaseCosts {
         List<RuleDefinition> rules = InstalledRules.builtIn().rules();
         CheckRequest request = Workspace.open(RunOptions.at(root), rules).request(List.of(root));
         Checker checker = new Checker(request, rules);
-        Rounds rounds1 = new Rounds(files, request, checker);
+        Rounds round = new Rounds(files, request, checker);
         int warmUp = 3;
         long[][] samples = new long[PHASES.length][rounds];
         for (int r = -warmUp; r < rounds; r++) {
-            long[] one = rounds1.once();
+            long[] one = round.once();
             if (r >= 0) {
                 for (int p = 0; p < PHASES.length; p++) {
                     samples[p][r] = one[p];
@@ -74,7 +74,7 @@ public final class PhaseCosts {
             double m = median(samples[p]);
             System.out.printf("%-26s %12.1f %10.2f%n", PHASES[p], m / files.size() / 1000.0, m / floor);
         }
-        System.out.println("(" + rounds1.work + ")");
+        System.out.println("(" + round.work + ")");
     }
 
     private static double median(long[] values) {
@@ -149,6 +149,7 @@ public final class PhaseCosts {
                 }
             }
             t[4] = now() - start;
+            // dropped before the whole check, so that its collections do not copy them around
             documents = null;
             programmes = null;
 

@@ -107,15 +107,15 @@ public final class CachedCheck {
         } catch (IOException e) {
             return new Pending(file, shown, false, null, checker.get().checkFile(file), false);
         }
-        if (cache.isEmpty()) {
-            return new Pending(file, shown, true, null, request.keep().apply(checker.get().checkFile(file, content)),
-                    false);
-        }
-        String hash = ContentHash.of(content);
-        Optional<FileReport> cached = cache.get().lookup(shown, hash);
+        String hash = cache.isPresent() ? ContentHash.of(content) : null;
+        Optional<FileReport> cached = cache.flatMap(c -> c.lookup(shown, hash));
         return cached.map(r -> new Pending(file, shown, true, hash, r, true))
-                .orElseGet(() -> new Pending(file, shown, true, hash,
-                        request.keep().apply(checker.get().checkFile(file, content)), false));
+                .orElseGet(() -> new Pending(file, shown, true, hash, checked(checker.get(), file, content), false));
+    }
+
+    /** A file checked afresh, kept as the request says (its figures packed for a JSON report, say). */
+    private FileReport checked(Checker checker, Path file, byte[] content) {
+        return request.keep().apply(checker.checkFile(file, content));
     }
 
     private static <T> Supplier<T> lazily(Supplier<T> make) {

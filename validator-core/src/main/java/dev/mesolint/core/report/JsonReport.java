@@ -50,23 +50,13 @@ public final class JsonReport implements ReportWriter {
         // Both lists are streamed: each entry is made, written and dropped, so a large run never holds them all.
         doc.putArray("files");
         Map<String, java.util.Iterator<ObjectNode>> streamed = new java.util.LinkedHashMap<>();
-        streamed.put("files", run.files().stream().map(file -> file(input, file)).iterator());
-        if (run.files().stream().anyMatch(file -> hasMetrics(input, file))) {
+        JsonFigures figures = JsonFigures.of(input.figures());
+        streamed.put("files", run.files().stream().map(file -> file(input, figures, file)).iterator());
+        if (run.files().stream().anyMatch(figures::hasMetrics)) {
             doc.putArray("metrics");
-            streamed.put("metrics", run.files().stream().map(file -> metrics(input, file)).flatMap(Optional::stream)
-                    .iterator());
+            streamed.put("metrics", run.files().stream().map(figures::metrics).flatMap(Optional::stream).iterator());
         }
         JsonText.write(doc, doc, streamed, out);
-    }
-
-    private static boolean hasMetrics(ReportInput input, FileReport file) {
-        return input.figures() instanceof PackedFigures packed ? packed.hasMetrics(file)
-                : input.figures().of(file).isPresent();
-    }
-
-    private static Optional<ObjectNode> metrics(ReportInput input, FileReport file) {
-        return input.figures() instanceof PackedFigures packed ? packed.metrics(file)
-                : input.figures().of(file).map(JsonReport::metrics);
     }
 
     /** The {@code programme} object of a file entry: the programme's id and title. */
@@ -77,14 +67,12 @@ public final class JsonReport implements ReportWriter {
         return programme;
     }
 
-    private static ObjectNode file(ReportInput input, FileReport file) {
+    private static ObjectNode file(ReportInput input, JsonFigures figures, FileReport file) {
         ObjectNode node = JsonText.object();
         node.put("path", file.displayPath());
         node.put("loaded", file.loaded());
         node.put("profile", file.profile());
-        Optional<ObjectNode> programme = input.figures() instanceof PackedFigures packed ? packed.programme(file)
-                : file.programme().map(JsonReport::programme);
-        programme.ifPresent(p -> node.set("programme", p));
+        figures.programme(file).ifPresent(p -> node.set("programme", p));
         ArrayNode findings = node.putArray("findings");
         file.findings().stream().filter(f -> f.severity() != Severity.OFF)
                 .forEach(f -> findings.add(finding(input, f)));

@@ -57,8 +57,13 @@ public final class ModelFigures implements ReportFigures {
     }
 
     @Override
+    public boolean has(FileReport file) {
+        return file.metrics().isPresent() && file.programme().isPresent();
+    }
+
+    @Override
     public Optional<ProgrammeFigures> of(FileReport file) {
-        if (file.metrics().isEmpty() || file.programme().isEmpty()) {
+        if (!has(file)) {
             return Optional.empty();
         }
         ProgrammeMetrics metrics = file.metrics().get();

@@ -21,7 +21,7 @@ import tools.jackson.databind.node.ObjectNode;
  *
  * <p>Thread-safe: files are packed in parallel.
  */
-public final class PackedFigures implements ReportFigures {
+public final class PackedFigures implements ReportFigures, JsonFigures {
     private final ModelFigures model;
     private final Map<String, Packed> packed = new ConcurrentHashMap<>();
 
@@ -57,17 +57,18 @@ public final class PackedFigures implements ReportFigures {
         return Optional.empty();
     }
 
-    /** The {@code programme} object of {@code file}'s entry in {@code files}, when it was packed. */
-    Optional<ObjectNode> programme(FileReport file) {
+    @Override
+    public Optional<ObjectNode> programme(FileReport file) {
         return part(file, "programme");
     }
 
-    /** {@code file}'s object of the {@code metrics} list, when it was packed. */
-    Optional<ObjectNode> metrics(FileReport file) {
+    @Override
+    public Optional<ObjectNode> metrics(FileReport file) {
         return part(file, "metrics");
     }
 
-    boolean hasMetrics(FileReport file) {
+    @Override
+    public boolean hasMetrics(FileReport file) {
         Packed p = packed.get(file.displayPath());
         return p != null && p.hasMetrics();
     }

@@ -14,4 +14,9 @@ public interface ReportFigures {
 
     /** The figures of one checked file; empty when the file did not load or no figures were computed. */
     Optional<ProgrammeFigures> of(FileReport file);
+
+    /** Whether {@link #of} gives figures for {@code file}; implementations that can tell without making them do. */
+    default boolean has(FileReport file) {
+        return of(file).isPresent();
+    }
 }
