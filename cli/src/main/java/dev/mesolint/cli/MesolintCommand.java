@@ -4,6 +4,7 @@ import dev.mesolint.core.Mesolint;
 import dev.mesolint.core.text.SafeText;
 import java.io.InputStream;
 import java.io.PrintWriter;
+import java.util.List;
 import picocli.AutoComplete;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -15,12 +16,17 @@ import picocli.CommandLine.Command;
         description = "Checks resistance-training programmes written in YAML the way a compiler checks code.",
         footer = {"", ConfigOptions.PRECEDENCE, "",
             MesolintCommand.EXIT_CODES,
-            "", "Caution: " + Mesolint.CAUTION},
-        subcommands = {CheckCommand.class, DiffCommand.class, MetricsCommand.class, BaselineCommand.class, RulesCommand.class,
-            ExplainCommand.class, CatalogueCommand.class, SchemaCommand.class, InitCommand.class,
-            AutoComplete.GenerateCompletion.class,
-            CommandLine.HelpCommand.class})
+            "", "Caution: " + Mesolint.CAUTION})
 public final class MesolintCommand implements Runnable {
+    /**
+     * The subcommands, in the order help lists them. Only the one a run names is modelled (see {@link #subcommandsFor}):
+     * picocli builds a command's model from its annotations by reflection, about a tenth of a one-file check's time.
+     */
+    static final List<Class<?>> SUBCOMMANDS = List.of(CheckCommand.class, DiffCommand.class, MetricsCommand.class,
+            BaselineCommand.class, RulesCommand.class, ExplainCommand.class, CatalogueCommand.class,
+            SchemaCommand.class, InitCommand.class, AutoComplete.GenerateCompletion.class,
+            CommandLine.HelpCommand.class);
+
     static final int EXIT_USAGE = 2;
     /** Out of memory or stack: the run was stopped, so nothing it printed can be trusted as complete. */
     static final int EXIT_RESOURCE_LIMIT = 3;
@@ -56,6 +62,9 @@ public final class MesolintCommand implements Runnable {
         MesolintCommand top = new MesolintCommand();
         top.in = in;
         CommandLine cli = new CommandLine(top);
+        for (Class<?> subcommand : subcommandsFor(args)) {
+            cli.addSubcommand(subcommand);
+        }
         cli.setOut(out);
         cli.setErr(err);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
@@ -79,6 +88,25 @@ public final class MesolintCommand implements Runnable {
             err.println("mesolint: internal error: " + SafeText.line(String.valueOf(e.getMessage())));
             return EXIT_USAGE;
         }
+    }
+
+    /**
+     * The subcommands a run needs: the one its first argument names, or all of them when it names none (help, the
+     * version, a completion script, a mistyped name that picocli then suggests a correction for).
+     */
+    static List<Class<?>> subcommandsFor(String[] args) {
+        if (args.length > 0) {
+            for (Class<?> subcommand : SUBCOMMANDS) {
+                if (subcommand == CommandLine.HelpCommand.class || subcommand == AutoComplete.GenerateCompletion.class) {
+                    continue; // both read the other subcommands' models
+                }
+                Command command = subcommand.getAnnotation(Command.class);
+                if (command.name().equals(args[0]) || List.of(command.aliases()).contains(args[0])) {
+                    return List.of(subcommand);
+                }
+            }
+        }
+        return SUBCOMMANDS;
     }
 
     /** A clear message for a run that ran out of memory or stack; exit 3 tells CI it was not a finding. */
