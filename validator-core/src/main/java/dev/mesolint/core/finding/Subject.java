@@ -23,7 +23,30 @@ public record Subject(String muscle, String exercise, Integer day, List<Integer>
     public static final Subject NONE = new Subject(null, null, null, List.of());
 
     public Subject {
-        weeks = weeks.stream().sorted().distinct().toList();
+        weeks = ascending(weeks) ? List.copyOf(weeks) : weeks.stream().sorted().distinct().toList();
+    }
+
+    /** Strictly ascending already (as every merged finding's weeks are): nothing to sort. */
+    private static boolean ascending(List<Integer> weeks) {
+        for (int i = 1; i < weeks.size(); i++) {
+            if (weeks.get(i - 1) >= weeks.get(i)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    // equals and hashCode as the record's generated ones give them, without their method handles (see Location).
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Subject s && Objects.equals(muscle, s.muscle)
+                && Objects.equals(exercise, s.exercise) && Objects.equals(day, s.day) && Objects.equals(weeks, s.weeks);
+    }
+
+    @Override
+    public int hashCode() {
+        return ((Objects.hashCode(muscle) * 31 + Objects.hashCode(exercise)) * 31 + Objects.hashCode(day)) * 31
+                + Objects.hashCode(weeks);
     }
 
     public static Subject muscle(String muscle) {

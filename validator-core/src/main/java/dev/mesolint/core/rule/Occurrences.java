@@ -15,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.TreeSet;
@@ -55,11 +56,38 @@ public final class Occurrences {
      */
     private record Finding(Location where, List<Waiver> waivers, Severity severity, String message, String fix,
             Facts facts) {
+        // Written out (as Location's are): these records key the merging maps, once per finding and week.
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Finding f && Objects.equals(where, f.where)
+                    && Objects.equals(waivers, f.waivers) && severity == f.severity
+                    && Objects.equals(message, f.message) && Objects.equals(fix, f.fix)
+                    && Objects.equals(facts, f.facts);
+        }
+
+        @Override
+        public int hashCode() {
+            return ((((Objects.hashCode(where) * 31 + Objects.hashCode(waivers)) * 31 + Objects.hashCode(severity))
+                    * 31 + Objects.hashCode(message)) * 31 + Objects.hashCode(fix)) * 31 + Objects.hashCode(facts);
+        }
     }
 
     /** A problem of one exercise at one written place, whose steps are collected week by week. */
     private record StepKey(String pointer, List<Waiver> waivers, String subject, String detail, String fix,
             Facts facts) {
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof StepKey k && Objects.equals(pointer, k.pointer)
+                    && Objects.equals(waivers, k.waivers)
+                    && Objects.equals(subject, k.subject) && Objects.equals(detail, k.detail)
+                    && Objects.equals(fix, k.fix) && Objects.equals(facts, k.facts);
+        }
+
+        @Override
+        public int hashCode() {
+            return ((((Objects.hashCode(pointer) * 31 + Objects.hashCode(waivers)) * 31 + Objects.hashCode(subject))
+                    * 31 + Objects.hashCode(detail)) * 31 + Objects.hashCode(fix)) * 31 + Objects.hashCode(facts);
+        }
     }
 
     private static final class Steps {

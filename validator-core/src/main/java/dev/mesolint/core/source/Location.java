@@ -39,6 +39,19 @@ public record Location(int line, int column, int endLine, int endColumn, String 
         return new Location(line, column, endLine, endColumn, other);
     }
 
+    // equals and hashCode written out, with the values the record's generated ones give: those go through method
+    // handles that the launcher's C1-only JIT does not inline, and locations key the maps that merge findings.
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Location l && line == l.line && column == l.column && endLine == l.endLine
+                && endColumn == l.endColumn && pointer.equals(l.pointer);
+    }
+
+    @Override
+    public int hashCode() {
+        return (((line * 31 + column) * 31 + endLine) * 31 + endColumn) * 31 + pointer.hashCode();
+    }
+
     @Override
     public String toString() {
         return line + ":" + column;
