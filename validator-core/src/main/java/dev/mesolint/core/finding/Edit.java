@@ -20,4 +20,17 @@ public record Edit(String pointer, String key, String text, Location location) {
         Objects.requireNonNull(text, "text");
         Objects.requireNonNull(location, "location");
     }
+
+    // equals and hashCode as the record's generated ones give them, without their method handles (see Location).
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Edit e && Objects.equals(pointer, e.pointer) && Objects.equals(key, e.key)
+                && Objects.equals(text, e.text) && Objects.equals(location, e.location);
+    }
+
+    @Override
+    public int hashCode() {
+        return ((Objects.hashCode(pointer) * 31 + Objects.hashCode(key)) * 31 + Objects.hashCode(text)) * 31
+                + Objects.hashCode(location);
+    }
 }

@@ -32,4 +32,17 @@ public record Facts(Subject subject, Optional<Measure> measure, Optional<Edit> e
     public Facts withEdit(Edit e) {
         return new Facts(subject, measure, Optional.ofNullable(e));
     }
+
+    // equals and hashCode as the record's generated ones give them, without their method handles (see Location):
+    // facts take part in the keys that merge a rule's findings.
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Facts f && Objects.equals(subject, f.subject)
+                && Objects.equals(measure, f.measure) && Objects.equals(edit, f.edit);
+    }
+
+    @Override
+    public int hashCode() {
+        return (Objects.hashCode(subject) * 31 + Objects.hashCode(measure)) * 31 + Objects.hashCode(edit);
+    }
 }

@@ -48,4 +48,20 @@ class WrittenOutEqualityTests {
         assertNotEquals(a, a.withMuscle("quadriceps"));
         assertNotEquals(a, a.withWeeks(List.of(week)));
     }
+
+    @Property(tries = 200)
+    void factsAndEditsKeepTheRecordsMeaning(@ForAll @IntRange(min = 1, max = 30) int line) {
+        Location at = new Location(line, 3, "/weeks/0/sessions/0/work/0/rest");
+        Edit edit = new Edit(at.pointer(), "rest", "120s", at);
+        Edit same = new Edit(at.pointer(), "rest", "120s", new Location(line, 3, at.pointer()));
+        assertEquals(edit, same);
+        assertEquals(((((at.pointer().hashCode() * 31) + "rest".hashCode()) * 31 + "120s".hashCode()) * 31)
+                + at.hashCode(), edit.hashCode(), "the record's hash");
+        assertNotEquals(edit, new Edit(at.pointer(), "rest", "90s", at));
+        Facts facts = Facts.NONE.withEdit(edit);
+        assertEquals(facts, Facts.NONE.withEdit(same));
+        assertEquals((Facts.NONE.subject().hashCode() * 31 + Facts.NONE.measure().hashCode()) * 31
+                + java.util.Optional.of(edit).hashCode(), facts.hashCode(), "the record's hash");
+        assertNotEquals(facts, Facts.NONE);
+    }
 }
