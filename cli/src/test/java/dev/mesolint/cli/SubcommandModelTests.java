@@ -48,6 +48,6 @@ class SubcommandModelTests {
         int exit = MesolintCommand.execute(new String[] {"chek"}, new PrintWriter(new StringWriter()),
                 new PrintWriter(err));
         assertEquals(MesolintCommand.EXIT_USAGE, exit);
-        assertTrue(err.toString().contains("check"), err.toString());
+        assertTrue(err.toString().contains("Did you mean: mesolint check"), err.toString());
     }
 }

@@ -10,9 +10,9 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 
 /**
- * Location and Subject write out equals and hashCode (for speed); they must keep a record's meaning: equal exactly
- * when every component is equal, and the hash a record's components give (31 * h + component, from 0), so that maps
- * keyed by them iterate, and so report, in the same order as before.
+ * Location, Subject, Facts and Edit write out equals and hashCode (for speed); they must keep a record's meaning:
+ * equal exactly when every component is equal, and the hash a record's components give (31 * h + component, from
+ * 0), so that maps keyed by them iterate, and so report, in the same order as before.
  */
 class WrittenOutEqualityTests {
     @Property(tries = 500)
