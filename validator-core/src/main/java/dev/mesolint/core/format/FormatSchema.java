@@ -5,7 +5,11 @@ import com.networknt.schema.SchemaRegistry;
 import com.networknt.schema.SpecificationVersion;
 import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.yaml.LocatedDocument;
+import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.Pointers;
+import dev.mesolint.core.yaml.YamlLimits;
+import dev.mesolint.core.yaml.YamlProblem;
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -16,9 +20,14 @@ import java.util.Map;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 import java.util.concurrent.ConcurrentHashMap;
+import tools.jackson.databind.JsonNode;
 
 /**
  * A published JSON Schema (programme or catalogue), compiled once per JVM and shared by every file and run.
+ *
+ * <p>Each document first meets the schema's {@link SchemaShortcut}, which passes the documents it can prove valid
+ * (nearly all of them) without the general validator; the general validator (networknt) is compiled the first time
+ * a document is not passed that way, and alone writes the violations. So a run over valid files never loads it.
  *
  * <p>Thread-safe: networknt compiles the schema into immutable validators; per-call state lives in its context.
  */
@@ -26,21 +35,25 @@ public final class FormatSchema {
     public static final String PROGRAMME = "programme.schema.json";
     public static final String CATALOGUE = "catalogue.schema.json";
 
-    /** Each schema compiled once; a schema {@link #prepare prepared} in the background is joined when loaded. */
-    private static final Map<String, CompletableFuture<FormatSchema>> COMPILED = new ConcurrentHashMap<>();
+    /** Each schema loaded once; a schema {@link #prepare prepared} in the background is joined when loaded. */
+    private static final Map<String, CompletableFuture<FormatSchema>> LOADED = new ConcurrentHashMap<>();
 
-    private final Schema schema;
+    private final String name;
+    /** Null when the schema uses a form the shortcut does not know: then every document meets the general one. */
+    private final SchemaShortcut shortcut;
+    private volatile Schema general;
 
-    private FormatSchema(Schema schema) {
-        this.schema = schema;
+    private FormatSchema(String name, SchemaShortcut shortcut) {
+        this.name = name;
+        this.shortcut = shortcut;
     }
 
-    /** The schema shipped in the core jar under {@code dev/mesolint/schema/}, compiled on first use. */
+    /** The schema shipped in the core jar under {@code dev/mesolint/schema/}, loaded on first use. */
     public static FormatSchema load(String name) {
         CompletableFuture<FormatSchema> mine = new CompletableFuture<>();
-        CompletableFuture<FormatSchema> known = COMPILED.putIfAbsent(name, mine);
+        CompletableFuture<FormatSchema> known = LOADED.putIfAbsent(name, mine);
         if (known == null) {
-            compileInto(mine, name);
+            loadInto(mine, name);
             known = mine;
         }
         try {
@@ -57,38 +70,75 @@ public final class FormatSchema {
     }
 
     /**
-     * Starts compiling {@code name} on a background thread, so that a run's start-up (configuration, profiles, the
-     * file walk) overlaps the compile, about a third of the start-up's time; {@link #load} then joins it.
+     * Starts loading {@code name} on a background thread, so that a run's start-up (configuration, profiles, the
+     * file walk) overlaps it; {@link #load} then joins it.
      */
     public static void prepare(String name) {
         CompletableFuture<FormatSchema> mine = new CompletableFuture<>();
-        if (COMPILED.putIfAbsent(name, mine) == null) {
-            Thread compiler = new Thread(() -> compileInto(mine, name), "mesolint-schema");
-            compiler.setDaemon(true);
-            compiler.start();
+        if (LOADED.putIfAbsent(name, mine) == null) {
+            Thread loader = new Thread(() -> loadInto(mine, name), "mesolint-schema");
+            loader.setDaemon(true);
+            loader.start();
         }
     }
 
-    private static void compileInto(CompletableFuture<FormatSchema> result, String name) {
+    private static void loadInto(CompletableFuture<FormatSchema> result, String name) {
         try {
-            result.complete(compile(name));
+            FormatSchema schema = new FormatSchema(name, SchemaShortcut.compile(parse(name)).orElse(null));
+            if (schema.shortcut == null) {
+                schema.general(); // every document will need it
+            }
+            result.complete(schema);
         } catch (RuntimeException | Error e) {
             result.completeExceptionally(e);
         }
     }
 
-    private static FormatSchema compile(String name) {
-        SchemaRegistry registry = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12);
+    /** The schema as a JSON tree, read with the same reader (and so the same node types) as the documents. */
+    private static JsonNode parse(String name) {
+        try {
+            return new LocatedYamlReader(YamlLimits.DEFAULTS).read(resource(name)).root();
+        } catch (YamlProblem e) {
+            throw new IllegalStateException("schema " + name + " in the core jar cannot be read: " + e.getMessage(), e);
+        }
+    }
+
+    private static byte[] resource(String name) {
         try (InputStream in = FormatSchema.class.getResourceAsStream("/dev/mesolint/schema/" + name)) {
             if (in == null) {
                 throw new IllegalStateException("schema " + name + " is missing from the core jar");
             }
-            Schema schema = registry.getSchema(in);
-            schema.initializeValidators();
-            return new FormatSchema(schema);
+            return in.readAllBytes();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /** networknt's compiled schema, made the first time a document needs it. */
+    private Schema general() {
+        Schema compiled = general;
+        if (compiled == null) {
+            synchronized (this) {
+                compiled = general;
+                if (compiled == null) {
+                    SchemaRegistry registry = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12);
+                    compiled = registry.getSchema(new ByteArrayInputStream(resource(name)));
+                    compiled.initializeValidators();
+                    general = compiled;
+                }
+            }
+        }
+        return compiled;
+    }
+
+    /** True when the shortcut proves {@code document} valid; package-private for the tests that hold it to networknt. */
+    boolean passedByShortcut(JsonNode document) {
+        return shortcut != null && shortcut.certainlyValid(document);
+    }
+
+    /** networknt's verdict alone, for the tests that hold the shortcut to it. */
+    boolean validByGeneral(JsonNode document) {
+        return general().validate(document).isEmpty();
     }
 
     /** The violations, located at the YAML node each is about, one per place, in file order. */
@@ -98,7 +148,10 @@ public final class FormatSchema {
         if (!outOfRange.isEmpty()) {
             return outOfRange;
         }
-        List<com.networknt.schema.Error> errors = schema.validate(document.root());
+        if (passedByShortcut(document.root())) {
+            return List.of();
+        }
+        List<com.networknt.schema.Error> errors = general().validate(document.root());
         Map<String, Violation> byPlace = new LinkedHashMap<>();
         for (com.networknt.schema.Error error : errors) {
             Violation v = SchemaMessages.describe(error, document);

@@ -44,7 +44,7 @@ public final class CheckRun {
      */
     public static RunResult run(RunRequest request, List<RuleDefinition> rules) throws ConfigProblem, IOException {
         if (request.cacheFile().isEmpty()) {
-            // Every file will be checked: compile the programme schema while the configuration is read. (With a
+            // Every file will be checked: load the programme schema while the configuration is read. (With a
             // cache, the schema may never be needed.)
             FormatSchema.prepare(FormatSchema.PROGRAMME);
         }
