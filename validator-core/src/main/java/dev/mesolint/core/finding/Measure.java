@@ -12,6 +12,18 @@ import java.util.Objects;
  *              {@code kg}, {@code reps}, {@code hours}
  */
 public record Measure(double value, double limit, String unit) {
+    // equals and hashCode written out with the record's own values (see Location for why)
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Measure m && Double.compare(value, m.value) == 0
+                && Double.compare(limit, m.limit) == 0 && unit.equals(m.unit);
+    }
+
+    @Override
+    public int hashCode() {
+        return (Double.hashCode(value) * 31 + Double.hashCode(limit)) * 31 + unit.hashCode();
+    }
+
 
     public Measure {
         Objects.requireNonNull(unit, "unit");

@@ -4,6 +4,7 @@ import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.source.Location;
 import java.util.List;
+import java.util.Objects;
 import java.util.Optional;
 
 /**
@@ -14,6 +15,26 @@ import java.util.Optional;
  */
 public record ExerciseWork(String exerciseId, int warmUpSets, List<SetPrescription> sets, Location location,
         Location exerciseLocation, List<Waiver> waivers, Optional<Role> role) implements WorkItem {
+    // equals and hashCode written out with the record's own values (see Location for why)
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof ExerciseWork w && Objects.equals(exerciseId, w.exerciseId)
+                && warmUpSets == w.warmUpSets && sets.equals(w.sets) && Objects.equals(location, w.location)
+                && Objects.equals(exerciseLocation, w.exerciseLocation) && waivers.equals(w.waivers)
+                && Objects.equals(role, w.role);
+    }
+
+    @Override
+    public int hashCode() {
+        int h = Objects.hashCode(exerciseId);
+        h = h * 31 + warmUpSets;
+        h = h * 31 + sets.hashCode();
+        h = h * 31 + Objects.hashCode(location);
+        h = h * 31 + Objects.hashCode(exerciseLocation);
+        h = h * 31 + waivers.hashCode();
+        return h * 31 + Objects.hashCode(role);
+    }
+
 
     public ExerciseWork {
         sets = List.copyOf(sets);

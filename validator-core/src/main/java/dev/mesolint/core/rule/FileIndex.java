@@ -34,6 +34,9 @@ public final class FileIndex {
     private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
     private Map<Integer, Week> weeksByNumber;
     private SetSummary sets;
+    /** The last lookup: rules walk a session's sets in order, and one exercise's sets share one id string. */
+    private String lastId;
+    private Exercise lastExercise;
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
         this.catalogue = catalogue;
@@ -75,11 +78,16 @@ public final class FileIndex {
 
     /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */
     public Exercise exercise(String id) {
+        if (id == lastId) {
+            return lastExercise;
+        }
         Exercise found = exercises.get(id);
         if (found == null && !exercises.containsKey(id)) {
             found = catalogue.find(id).orElse(null);
             exercises.put(id, found);
         }
+        lastId = id;
+        lastExercise = found;
         return found;
     }
 

@@ -16,6 +16,7 @@ import dev.mesolint.core.source.Location;
 import dev.mesolint.core.value.Durations;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.Objects;
 import java.util.function.BiFunction;
 
 /**
@@ -28,6 +29,17 @@ final class RestCheck {
 
     /** The limit a rule sets for an exercise: the parameter to read and the words for "after ... sets". */
     record Limit(String parameter, String after) {
+        // equals and hashCode written out with the record's own values (see Location for why)
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Limit l && Objects.equals(parameter, l.parameter)
+                    && Objects.equals(after, l.after);
+        }
+
+        @Override
+        public int hashCode() {
+            return Objects.hashCode(parameter) * 31 + Objects.hashCode(after);
+        }
     }
 
     /**
@@ -105,6 +117,21 @@ final class RestCheck {
      * it is a superset's rest after a round.
      */
     private record Said(Location where, double rest, double changeovers, Limit limit, boolean superset) {
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Said s && Objects.equals(where, s.where)
+                    && Double.compare(rest, s.rest) == 0 && Double.compare(changeovers, s.changeovers) == 0
+                    && Objects.equals(limit, s.limit) && superset == s.superset;
+        }
+
+        @Override
+        public int hashCode() {
+            int h = Objects.hashCode(where);
+            h = h * 31 + Double.hashCode(rest);
+            h = h * 31 + Double.hashCode(changeovers);
+            h = h * 31 + Objects.hashCode(limit);
+            return h * 31 + Boolean.hashCode(superset);
+        }
     }
 
     /** A short rest's words, made once for the weeks that repeat it. */

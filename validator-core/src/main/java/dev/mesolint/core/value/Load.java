@@ -11,6 +11,17 @@ public sealed interface Load permits Load.Relative, Load.Absolute {
 
     /** A share of 1RM; {@code fraction} 0.75 for {@code 75%}. */
     record Relative(double fraction) implements Load {
+        // equals and hashCode written out with the record's own values (see Location for why)
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Relative r && Double.compare(fraction, r.fraction) == 0;
+        }
+
+        @Override
+        public int hashCode() {
+            return Double.hashCode(fraction);
+        }
+
         public Relative {
             if (!(fraction > 0 && fraction <= 1.0)) {
                 throw new IllegalArgumentException("fraction must be in (0, 1], was " + fraction);
@@ -25,6 +36,16 @@ public sealed interface Load permits Load.Relative, Load.Absolute {
 
     /** An absolute weight. */
     record Absolute(double amount, LoadUnit unit) implements Load {
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Absolute a && Double.compare(amount, a.amount) == 0 && unit == a.unit;
+        }
+
+        @Override
+        public int hashCode() {
+            return Double.hashCode(amount) * 31 + unit.hashCode();
+        }
+
         public Absolute {
             if (!(amount > 0)) {
                 throw new IllegalArgumentException("amount must be > 0, was " + amount);

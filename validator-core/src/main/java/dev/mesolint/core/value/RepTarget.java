@@ -11,6 +11,17 @@ import java.util.regex.Pattern;
  * {@code amrap} has no floor ({@code min} 0).
  */
 public record RepTarget(int min, int max, boolean amrap) {
+    // equals and hashCode written out with the record's own values (see Location for why)
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof RepTarget r && min == r.min && max == r.max && amrap == r.amrap;
+    }
+
+    @Override
+    public int hashCode() {
+        return (min * 31 + max) * 31 + Boolean.hashCode(amrap);
+    }
+
     public static final String HINT = "write a whole number such as 8, a range such as 8-12, 5+ (at least 5, then as many as possible) or amrap";
     public static final int MAX_REPS = 100;
     public static final RepTarget AMRAP = new RepTarget(0, 0, true);

@@ -5,6 +5,18 @@ import java.util.regex.Pattern;
 
 /** Reps in reserve at the end of a set: one value ({@code 2}) or a range ({@code 1-2}), 0..10. */
 public record RirRange(double min, double max) {
+    // equals and hashCode written out with the record's own values (see Location for why)
+    @Override
+    public boolean equals(Object o) {
+        return this == o
+                || o instanceof RirRange r && Double.compare(min, r.min) == 0 && Double.compare(max, r.max) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Double.hashCode(min) * 31 + Double.hashCode(max);
+    }
+
     public static final String HINT = "write reps in reserve from 0 to 10, e.g. 2, or a range such as 1-2";
     public static final double LIMIT = 10;
 
