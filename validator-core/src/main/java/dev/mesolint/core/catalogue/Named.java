@@ -1,6 +1,5 @@
 package dev.mesolint.core.catalogue;
 
-import java.util.Arrays;
 import java.util.Locale;
 import java.util.Optional;
 
@@ -13,6 +12,6 @@ public interface Named {
     }
 
     static <E extends Enum<E> & Named> Optional<E> byYamlName(Class<E> type, String name) {
-        return Arrays.stream(type.getEnumConstants()).filter(e -> e.yamlName().equals(name)).findFirst();
+        return name == null ? Optional.empty() : Optional.ofNullable(type.cast(NamedConstants.of(type).get(name)));
     }
 }

@@ -5,10 +5,7 @@ import com.networknt.schema.SchemaRegistry;
 import com.networknt.schema.SpecificationVersion;
 import dev.mesolint.core.source.Violation;
 import dev.mesolint.core.yaml.LocatedDocument;
-import dev.mesolint.core.yaml.LocatedYamlReader;
 import dev.mesolint.core.yaml.Pointers;
-import dev.mesolint.core.yaml.YamlLimits;
-import dev.mesolint.core.yaml.YamlProblem;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -84,22 +81,13 @@ public final class FormatSchema {
 
     private static void loadInto(CompletableFuture<FormatSchema> result, String name) {
         try {
-            FormatSchema schema = new FormatSchema(name, SchemaShortcut.compile(parse(name)).orElse(null));
+            FormatSchema schema = new FormatSchema(name, SchemaShortcut.compile(SchemaTree.read(resource(name))).orElse(null));
             if (schema.shortcut == null) {
                 schema.general(); // every document will need it
             }
             result.complete(schema);
         } catch (RuntimeException | Error e) {
             result.completeExceptionally(e);
-        }
-    }
-
-    /** The schema as a JSON tree, read with the same reader (and so the same node types) as the documents. */
-    private static JsonNode parse(String name) {
-        try {
-            return new LocatedYamlReader(YamlLimits.DEFAULTS).read(resource(name)).root();
-        } catch (YamlProblem e) {
-            throw new IllegalStateException("schema " + name + " in the core jar cannot be read: " + e.getMessage(), e);
         }
     }
 
