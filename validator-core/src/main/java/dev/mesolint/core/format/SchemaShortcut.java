@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.regex.Pattern;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -506,6 +507,13 @@ final class SchemaShortcut {
 
     /** String lengths and patterns. */
     private static final class Texts {
+        /**
+         * Texts a pattern is known to match, per pattern: programmes repeat the same few rests, loads and rep ranges
+         * on every set, and a set lookup costs a fraction of a regular-expression match. Bounded, so odd input cannot
+         * grow it.
+         */
+        private static final int REMEMBERED_MATCHES = 512;
+
         private Texts() {
         }
 
@@ -536,13 +544,23 @@ final class SchemaShortcut {
             } catch (RuntimeException e) {
                 throw new UnknownForm("a pattern Java does not read");
             }
+            Set<String> matched = ConcurrentHashMap.newKeySet();
             return node -> {
                 if (!node.isString()) {
                     return true;
                 }
                 String text = node.stringValue();
+                if (matched.contains(text)) {
+                    return true;
+                }
                 // Java's '$' also matches before a final line break and ECMA 262's does not: such text is not certain
-                return !endsWithLineBreak(text) && pattern.matcher(text).find();
+                if (endsWithLineBreak(text) || !pattern.matcher(text).find()) {
+                    return false;
+                }
+                if (matched.size() < REMEMBERED_MATCHES) {
+                    matched.add(text);
+                }
+                return true;
             };
         }
 

@@ -4,6 +4,7 @@ import dev.mesolint.core.finding.Anchor;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.Map;
 import tools.jackson.databind.JsonNode;
 
@@ -45,6 +46,8 @@ public final class Anchors {
         }
 
         private final Map<String, Resolved> byPointer = new HashMap<>();
+        /** Each list's element names, made in one walk of the list the first time one of them is asked for. */
+        private final Map<JsonNode, String[]> namesOf = new IdentityHashMap<>();
         private final Resolved root;
 
         Paths(JsonNode root) {
@@ -81,13 +84,13 @@ public final class Anchors {
         }
 
         /** One segment on from {@code parent}: a list position becomes the element's name where it has one. */
-        private static Resolved step(Resolved parent, String raw) {
+        private Resolved step(Resolved parent, String raw) {
             String segment = raw.replace("~1", "/").replace("~0", "~");
             JsonNode node = parent.node();
             if (node != null && node.isArray() && isIndex(segment)) {
                 int index = Integer.parseInt(segment);
-                return new Resolved(parent.path() + '/' + (index < node.size() ? name(node, index) : segment),
-                        node.get(index));
+                return new Resolved(parent.path() + '/' + (index < node.size()
+                        ? namesOf.computeIfAbsent(node, Anchors::names)[index] : segment), node.get(index));
             }
             return new Resolved(Pointers.child(parent.path(), segment), node == null ? null : node.get(segment));
         }
@@ -108,27 +111,28 @@ public final class Anchors {
         }
     }
 
-    /** The element's name, with its occurrence among earlier siblings of the same name from the second on. */
-    private static String name(JsonNode list, int index) {
-        if (writtenWeek(list.get(index))) {
-            int written = 1;
-            for (int i = 0; i < index; i++) {
-                written += writtenWeek(list.get(i)) ? 1 : 0;
+    /**
+     * Each element's name, with its occurrence among earlier siblings of the same name from the second on (a written
+     * week counts among the siblings named by its number, though it is named by its place among written weeks).
+     */
+    private static String[] names(JsonNode list) {
+        String[] names = new String[list.size()];
+        Map<String, Integer> seen = new HashMap<>();
+        int written = 0;
+        for (int i = 0; i < names.length; i++) {
+            JsonNode element = list.get(i);
+            String name = ownName(element);
+            int occurrence = name == null ? 0 : seen.merge(name, 1, Integer::sum);
+            if (writtenWeek(element)) {
+                names[i] = "written-week=" + ++written;
+            } else if (name == null) {
+                names[i] = Integer.toString(i);
+            } else {
+                String escaped = name.replace("~", "~0").replace("/", "~1");
+                names[i] = occurrence == 1 ? escaped : escaped + "#" + occurrence;
             }
-            return "written-week=" + written;
         }
-        String name = ownName(list.get(index));
-        if (name == null) {
-            return Integer.toString(index);
-        }
-        int occurrence = 1;
-        for (int i = 0; i < index; i++) {
-            if (name.equals(ownName(list.get(i)))) {
-                occurrence++;
-            }
-        }
-        String escaped = name.replace("~", "~0").replace("/", "~1");
-        return occurrence == 1 ? escaped : escaped + "#" + occurrence;
+        return names;
     }
 
     private static boolean writtenWeek(JsonNode element) {
