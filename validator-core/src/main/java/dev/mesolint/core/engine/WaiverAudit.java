@@ -114,6 +114,9 @@ final class WaiverAudit {
     }
 
     private static void collect(List<Waiver> waivers, Set<Waiver> seen, List<Waiver> all) {
+        if (waivers.isEmpty()) {
+            return; // nearly every list: and an empty list's iterator is still an allocation per set
+        }
         for (Waiver w : waivers) {
             if (seen.add(w)) {
                 all.add(w);

@@ -2,6 +2,7 @@ package dev.mesolint.core.model;
 
 import dev.mesolint.core.catalogue.Catalogue;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.Map;
 
 /**
@@ -14,6 +15,8 @@ final class ExerciseTable {
 
     private final Catalogue catalogue;
     private final Map<String, Object> byId = new HashMap<>();
+    /** The same by the id string itself: sets share a few id strings, and references compare faster (FileIndex). */
+    private final Map<String, Object> bySameId = new IdentityHashMap<>();
 
     ExerciseTable(Catalogue catalogue) {
         this.catalogue = catalogue;
@@ -21,10 +24,14 @@ final class ExerciseTable {
 
     /** The exercise's figures; null when the catalogue does not know it (its sets are left out). */
     ExerciseFigures find(String id) {
-        Object known = byId.get(id);
+        Object known = bySameId.get(id);
         if (known == null) {
-            known = catalogue.find(id).<Object>map(ExerciseFigures::new).orElse(UNKNOWN);
-            byId.put(id, known);
+            known = byId.get(id);
+            if (known == null) {
+                known = catalogue.find(id).<Object>map(ExerciseFigures::new).orElse(UNKNOWN);
+                byId.put(id, known);
+            }
+            bySameId.put(id, known);
         }
         return known == UNKNOWN ? null : (ExerciseFigures) known;
     }

@@ -34,9 +34,11 @@ public final class FileIndex {
     private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
     private Map<Integer, Week> weeksByNumber;
     private SetSummary sets;
-    /** The last lookup: rules walk a session's sets in order, and one exercise's sets share one id string. */
-    private String lastId;
-    private Exercise lastExercise;
+    /**
+     * The same lookups by the id string itself: a file's sets share a few id strings (the programme's and the
+     * catalogue's), so comparing references spares comparing the characters of every id on every lookup.
+     */
+    private final Map<String, Exercise> exercisesBySameId = new IdentityHashMap<>();
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
         this.catalogue = catalogue;
@@ -78,16 +80,15 @@ public final class FileIndex {
 
     /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */
     public Exercise exercise(String id) {
-        if (id == lastId) {
-            return lastExercise;
+        Exercise found = exercisesBySameId.get(id);
+        if (found == null && !exercisesBySameId.containsKey(id)) {
+            found = exercises.get(id);
+            if (found == null && !exercises.containsKey(id)) {
+                found = catalogue.find(id).orElse(null);
+                exercises.put(id, found);
+            }
+            exercisesBySameId.put(id, found);
         }
-        Exercise found = exercises.get(id);
-        if (found == null && !exercises.containsKey(id)) {
-            found = catalogue.find(id).orElse(null);
-            exercises.put(id, found);
-        }
-        lastId = id;
-        lastExercise = found;
         return found;
     }
 

@@ -26,7 +26,8 @@ final class PlainScalarResolver extends Resolver {
     @Override
     public Tag resolve(NodeId kind, String value, boolean implicit) {
         if (kind == NodeId.scalar && implicit) {
-            return value.equals("<<") || value.equals("=") ? YAML_11.resolve(kind, value, true) : PLAIN;
+            boolean merge = value.length() <= 2 && (value.equals("<<") || value.equals("="));
+            return merge ? YAML_11.resolve(kind, value, true) : PLAIN;
         }
         return super.resolve(kind, value, implicit);
     }
