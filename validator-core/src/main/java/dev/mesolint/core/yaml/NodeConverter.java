@@ -89,7 +89,8 @@ final class NodeConverter {
     }
 
     private static boolean merge(Tag tag) {
-        return tag == Tag.MERGE || (tag != Tag.STR && tag.equals(Tag.MERGE));
+        // nearly every key is a plain scalar, so its tag is the resolver's own constant
+        return tag == Tag.MERGE || (tag != PlainScalarResolver.PLAIN && tag != Tag.STR && tag.equals(Tag.MERGE));
     }
 
     private LocatedObject mapping(MappingNode node, int depth) throws YamlProblem {
@@ -204,7 +205,8 @@ final class NodeConverter {
 
     private static JsonNode scalar(ScalarNode scalar, Tag tag) {
         String text = scalar.getValue();
-        if (scalar.getScalarStyle() != DumperOptions.ScalarStyle.PLAIN || tag == Tag.STR || tag.equals(Tag.STR)) {
+        if (scalar.getScalarStyle() != DumperOptions.ScalarStyle.PLAIN || tag == Tag.STR
+                || (tag != PlainScalarResolver.PLAIN && tag.equals(Tag.STR))) {
             return JSON.stringNode(text);
         }
         switch (text) {
