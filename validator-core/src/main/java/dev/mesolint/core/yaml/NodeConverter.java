@@ -114,7 +114,7 @@ final class NodeConverter {
                 throw new YamlProblem("a mapping key must be a plain name, not a list or mapping",
                         "write 'name: value'", Spans.of(keyNode, pointer(depth)));
             }
-            String key = keyScalar.getValue();
+            String key = KeyNames.canonical(keyScalar.getValue());
             int first = seen != null ? seen.getOrDefault(key, -1) : indexOf(names, count, key);
             if (first >= 0) {
                 Location firstAt = Spans.of(explicit[first].getKeyNode(), pointer(depth));
