@@ -138,8 +138,9 @@ final class NodeConverter {
     }
 
     private static int indexOf(String[] names, int count, String key) {
+        int hash = key.hashCode(); // computed once per key and kept by the string: most keys differ by it
         for (int i = 0; i < count; i++) {
-            if (names[i].equals(key)) {
+            if (names[i].hashCode() == hash && names[i].equals(key)) {
                 return i;
             }
         }

@@ -5,12 +5,16 @@ public final class Pointers {
     private Pointers() {
     }
 
+    // Built at their exact length: pointers are made for every written field, and a builder of the default size
+    // would grow, copying, for most of them.
     public static String child(String parent, String key) {
-        return parent + "/" + escape(key);
+        String segment = escape(key);
+        return new StringBuilder(parent.length() + 1 + segment.length()).append(parent).append('/').append(segment)
+                .toString();
     }
 
     public static String child(String parent, int index) {
-        return parent + "/" + index;
+        return new StringBuilder(parent.length() + 11).append(parent).append('/').append(index).toString();
     }
 
     private static String escape(String key) {
