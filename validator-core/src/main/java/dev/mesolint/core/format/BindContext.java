@@ -7,7 +7,9 @@ import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -56,17 +58,56 @@ final class BindContext {
         if (node == null || node.isNull()) {
             return Optional.empty();
         }
-        try {
-            return Optional.of(parser.parse(node.asString()));
-        } catch (InvalidValueException e) {
-            reject(Pointers.child(pointer, key), e);
-            return Optional.empty();
+        String text = node.asString();
+        Map<String, Object> known = ParsedValues.of(parser);
+        Object value = known == null ? null : known.get(text);
+        if (value == null) {
+            try {
+                value = parser.parse(text);
+            } catch (InvalidValueException e) {
+                reject(Pointers.child(pointer, key), e);
+                return Optional.empty();
+            }
+            ParsedValues.remember(known, text, value);
         }
+        @SuppressWarnings("unchecked") // remembered by this parser, which returned a T
+        T typed = (T) value;
+        return Optional.of(typed);
     }
 
     static String text(JsonNode parent, String key) {
         JsonNode node = parent.get(key);
         return node == null || node.isNull() ? null : node.asString();
+    }
+
+    /**
+     * What each value parser made of a text, so that the few rests, loads and rep ranges a library repeats on every
+     * set are parsed (by regular expression) once per run. The parsers are pure functions of the text and their
+     * values immutable; only values are kept, never refusals. Bounded in parsers and in texts per parser.
+     */
+    private static final class ParsedValues {
+        private static final int MAX_PARSERS = 64;
+        private static final int MAX_TEXTS = 1024;
+        private static final ConcurrentHashMap<ValueParser<?>, Map<String, Object>> BY_PARSER =
+                new ConcurrentHashMap<>();
+
+        private ParsedValues() {
+        }
+
+        /** The parser's remembered values; null when no more parsers are remembered (a parser made per call). */
+        static Map<String, Object> of(ValueParser<?> parser) {
+            Map<String, Object> known = BY_PARSER.get(parser);
+            if (known == null && BY_PARSER.size() < MAX_PARSERS) {
+                known = BY_PARSER.computeIfAbsent(parser, p -> new ConcurrentHashMap<>());
+            }
+            return known;
+        }
+
+        static void remember(Map<String, Object> known, String text, Object value) {
+            if (known != null && known.size() < MAX_TEXTS) {
+                known.putIfAbsent(text, value);
+            }
+        }
     }
 
     /** A value parser that may refuse its input. */

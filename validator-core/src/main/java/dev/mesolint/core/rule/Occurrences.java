@@ -176,12 +176,25 @@ public final class Occurrences {
             return "";
         }
         String noun = labels.size() == 1 ? singular : singular + "s";
-        if (labels.stream().allMatch(s -> s.matches("\\d+"))) {
+        if (labels.stream().allMatch(Occurrences::isNumber)) {
             TreeSet<Integer> numbers = new TreeSet<>();
             labels.forEach(s -> numbers.add(Integer.parseInt(s)));
             return ", " + noun + " " + Ranges.of(numbers);
         }
         return ", " + noun + " " + String.join(", ", labels);
+    }
+
+    /** One or more ASCII digits (a set's number), checked without compiling a pattern per label. */
+    private static boolean isNumber(String label) {
+        if (label.isEmpty()) {
+            return false;
+        }
+        for (int i = 0; i < label.length(); i++) {
+            if (label.charAt(i) < '0' || label.charAt(i) > '9') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

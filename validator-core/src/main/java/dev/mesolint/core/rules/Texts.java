@@ -4,9 +4,12 @@ import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.rule.Ranges;
 import java.util.Collection;
 import java.util.TreeSet;
+import java.util.regex.Pattern;
 
 /** Number and list wording shared by the model rules' messages. */
 final class Texts {
+    private static final Pattern ELEVEN_OR_EIGHTEEN = Pattern.compile("1[18](\\.\\d+)?");
+
     private Texts() {
     }
 
@@ -33,7 +36,7 @@ final class Texts {
 
     /** {@code a 7-rep effort}, {@code an 11-rep effort}: the article for a number read aloud. */
     static String article(String number) {
-        boolean vowel = number.startsWith("8") || number.matches("1[18](\\.\\d+)?");
+        boolean vowel = number.startsWith("8") || ELEVEN_OR_EIGHTEEN.matcher(number).matches();
         return vowel ? "an" : "a";
     }
 
