@@ -199,16 +199,7 @@ final class SchemaShortcut {
         }
 
         private static Test required(JsonNode names) throws UnknownForm {
-            if (!names.isArray()) {
-                throw new UnknownForm("required that is not a list");
-            }
-            List<String> required = new ArrayList<>();
-            for (JsonNode name : names) {
-                if (!name.isString()) {
-                    throw new UnknownForm("a required name that is not text");
-                }
-                required.add(name.stringValue());
-            }
+            List<String> required = texts(names, "required");
             return node -> {
                 if (!node.isObject()) {
                     return true;
@@ -220,6 +211,21 @@ final class SchemaShortcut {
                 }
                 return true;
             };
+        }
+
+        /** The texts of {@code values}, a list of text only; {@code what} names the keyword for the refusal. */
+        static List<String> texts(JsonNode values, String what) throws UnknownForm {
+            if (!values.isArray()) {
+                throw new UnknownForm(what + " that is not a list");
+            }
+            List<String> texts = new ArrayList<>();
+            for (JsonNode value : values) {
+                if (!value.isString()) {
+                    throw new UnknownForm(what + " with an entry that is not text");
+                }
+                texts.add(value.stringValue());
+            }
+            return texts;
         }
 
         private static Test propertyNames(Test names) {
@@ -677,17 +683,7 @@ final class SchemaShortcut {
         }
 
         private static Set<String> texts(JsonNode values) throws UnknownForm {
-            if (!values.isArray()) {
-                throw new UnknownForm("an enum that is not a list");
-            }
-            Set<String> texts = new HashSet<>();
-            for (JsonNode value : values) {
-                if (!value.isString()) {
-                    throw new UnknownForm("an enum under if that is not text");
-                }
-                texts.add(value.stringValue());
-            }
-            return texts;
+            return new HashSet<>(Compiler.texts(values, "an enum under if"));
         }
     }
 }
