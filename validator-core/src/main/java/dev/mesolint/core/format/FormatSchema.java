@@ -81,7 +81,8 @@ public final class FormatSchema {
 
     private static void loadInto(CompletableFuture<FormatSchema> result, String name) {
         try {
-            FormatSchema schema = new FormatSchema(name, SchemaShortcut.compile(SchemaTree.read(resource(name))).orElse(null));
+            SchemaShortcut shortcut = SchemaShortcut.compile(SchemaTree.read(resource(name))).orElse(null);
+            FormatSchema schema = new FormatSchema(name, shortcut);
             if (schema.shortcut == null) {
                 schema.general(); // every document will need it
             }
@@ -119,7 +120,7 @@ public final class FormatSchema {
         return compiled;
     }
 
-    /** True when the shortcut proves {@code document} valid; package-private for the tests that hold it to networknt. */
+    /** True when the shortcut proves {@code document} valid (package-private for the tests that check it). */
     boolean passedByShortcut(JsonNode document) {
         return shortcut != null && shortcut.certainlyValid(document);
     }

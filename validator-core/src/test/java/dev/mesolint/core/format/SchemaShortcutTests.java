@@ -135,7 +135,8 @@ class SchemaShortcutTests {
 
     @Test
     void aSchemaWithAFormItDoesNotKnowTurnsTheShortcutOff() {
-        assertEquals(Optional.empty(), SchemaShortcut.compile(read("{\"type\": \"object\", \"dependentRequired\": {}}")));
+        assertEquals(Optional.empty(),
+                SchemaShortcut.compile(read("{\"type\": \"object\", \"dependentRequired\": {}}")));
         assertEquals(Optional.empty(), SchemaShortcut.compile(read("{\"not\": {\"type\": \"string\"}}")));
         assertEquals(Optional.empty(), SchemaShortcut.compile(read("{\"$ref\": \"other.json#/x\"}")));
         assertEquals(Optional.empty(), SchemaShortcut.compile(read("{\"enum\": [[1], 2]}")));
