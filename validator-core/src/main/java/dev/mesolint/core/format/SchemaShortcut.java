@@ -281,15 +281,7 @@ final class SchemaShortcut {
         }
 
         private Test anyOf(JsonNode schemas) throws UnknownForm {
-            List<Test> options = list(schemas);
-            return node -> {
-                for (Test option : options) {
-                    if (option.passes(node)) {
-                        return true;
-                    }
-                }
-                return false;
-            };
+            return any(list(schemas));
         }
 
         private Test allOf(JsonNode schemas) throws UnknownForm {
@@ -324,6 +316,18 @@ final class SchemaShortcut {
             }
             Test[] resolved = slot;
             return node -> resolved[0].passes(node);
+        }
+
+        private static Test any(List<Test> options) {
+            Test[] array = options.toArray(Test[]::new);
+            return node -> {
+                for (Test option : array) {
+                    if (option.passes(node)) {
+                        return true;
+                    }
+                }
+                return false;
+            };
         }
 
         private static Test all(List<Test> tests) {
@@ -364,15 +368,7 @@ final class SchemaShortcut {
                 }
                 options.add(one(name.stringValue()));
             }
-            Test[] array = options.toArray(Test[]::new);
-            return node -> {
-                for (Test option : array) {
-                    if (option.passes(node)) {
-                        return true;
-                    }
-                }
-                return false;
-            };
+            return Compiler.any(options);
         }
 
         private static Test one(String name) throws UnknownForm {

@@ -2,6 +2,7 @@ package dev.mesolint.core.rule;
 
 import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.ExerciseLookups;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.model.RestGap;
@@ -25,23 +26,17 @@ import java.util.Map;
 public final class FileIndex {
     private static final List<Muscle> NO_MUSCLES = List.of();
 
-    private final Catalogue catalogue;
+    private final ExerciseLookups<Exercise> exercises;
     private final List<Week> weeks;
     private final ModelParameters parameters;
     private final List<WeekMetrics> figures;
-    private final Map<String, Exercise> exercises = new HashMap<>();
     private final Map<Exercise, List<Muscle>> primeMovers = new IdentityHashMap<>();
     private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
     private Map<Integer, Week> weeksByNumber;
     private SetSummary sets;
-    /**
-     * The same lookups by the id string itself: a file's sets share a few id strings (the programme's and the
-     * catalogue's), so comparing references spares comparing the characters of every id on every lookup.
-     */
-    private final Map<String, Exercise> exercisesBySameId = new IdentityHashMap<>();
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
-        this.catalogue = catalogue;
+        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).orElse(null));
         this.weeks = weeks;
         this.parameters = parameters;
         this.figures = figures;
@@ -80,16 +75,7 @@ public final class FileIndex {
 
     /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */
     public Exercise exercise(String id) {
-        Exercise found = exercisesBySameId.get(id);
-        if (found == null && !exercisesBySameId.containsKey(id)) {
-            found = exercises.get(id);
-            if (found == null && !exercises.containsKey(id)) {
-                found = catalogue.find(id).orElse(null);
-                exercises.put(id, found);
-            }
-            exercisesBySameId.put(id, found);
-        }
-        return found;
+        return exercises.get(id);
     }
 
     /** The muscles {@code exercise} credits as prime mover (credit 1 or more), in the order the entry writes them. */

@@ -10,6 +10,7 @@ import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
 import dev.mesolint.core.source.Location;
+import dev.mesolint.core.value.WholeNumbers;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -176,25 +177,12 @@ public final class Occurrences {
             return "";
         }
         String noun = labels.size() == 1 ? singular : singular + "s";
-        if (labels.stream().allMatch(Occurrences::isNumber)) {
+        if (labels.stream().allMatch(WholeNumbers::digitsOnly)) {
             TreeSet<Integer> numbers = new TreeSet<>();
             labels.forEach(s -> numbers.add(Integer.parseInt(s)));
             return ", " + noun + " " + Ranges.of(numbers);
         }
         return ", " + noun + " " + String.join(", ", labels);
-    }
-
-    /** One or more ASCII digits (a set's number), checked without compiling a pattern per label. */
-    private static boolean isNumber(String label) {
-        if (label.isEmpty()) {
-            return false;
-        }
-        for (int i = 0; i < label.length(); i++) {
-            if (label.charAt(i) < '0' || label.charAt(i) > '9') {
-                return false;
-            }
-        }
-        return true;
     }
 
     /**

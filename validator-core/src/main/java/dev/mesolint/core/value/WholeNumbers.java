@@ -1,7 +1,7 @@
 package dev.mesolint.core.value;
 
 /** Reads the digits of a value's whole-number part with its range checked first, so no digit string can overflow. */
-final class WholeNumbers {
+public final class WholeNumbers {
     private WholeNumbers() {
     }
 
@@ -30,7 +30,7 @@ final class WholeNumbers {
     }
 
     /** True for one or more ASCII digits and nothing else. */
-    static boolean digitsOnly(String s) {
+    public static boolean digitsOnly(String s) {
         if (s.isEmpty()) {
             return false;
         }
