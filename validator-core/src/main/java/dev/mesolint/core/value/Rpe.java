@@ -30,6 +30,18 @@ public record Rpe(double value) {
         return new Rpe(v);
     }
 
+    // equals and hashCode written out with the values the record's generated ones give: those link through method
+    // handles the first time they run, and Rpe's was the one such link left in a check (see Location).
+    @Override
+    public boolean equals(Object o) {
+        return this == o || o instanceof Rpe r && Double.compare(value, r.value) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Double.hashCode(value);
+    }
+
     /** Reps in reserve on the RIR-based scale: {@code 10 - RPE}. */
     public double repsInReserve() {
         return 10 - value;

@@ -78,6 +78,15 @@ class WrittenOutValueEqualityTests {
     }
 
     @Property(tries = 100)
+    void rpesHashAsRecordsDo(@ForAll @IntRange(min = 10, max = 20) int halves) {
+        Rpe rpe = new Rpe(halves / 2.0);
+        assertEquals(new One(halves / 2.0).hashCode(), rpe.hashCode());
+        assertEquals(new Rpe(halves / 2.0), rpe);
+        assertNotEquals(new Rpe(halves < 20 ? (halves + 1) / 2.0 : 9.5), rpe);
+        assertNotEquals(new RirRange(0, 10 - halves / 2.0), rpe);
+    }
+
+    @Property(tries = 100)
     void exerciseWorkHashesAsARecordDoes(@ForAll @IntRange(min = 0, max = 3) int warmUps,
             @ForAll @IntRange(min = 1, max = 40) int line) {
         Location at = new Location(line, 7, "/weeks/0/sessions/0/work/0");
