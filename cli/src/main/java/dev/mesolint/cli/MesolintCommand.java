@@ -49,7 +49,12 @@ public final class MesolintCommand implements Runnable {
     }
 
     public static void main(String[] args) {
-        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+        // Standard output is not flushed line by line (a report of 40,000 findings was 80,000 write calls): each
+        // report flushes when it is written, and whatever is left goes out before the exit.
+        PrintWriter out = new PrintWriter(System.out, false);
+        int code = execute(args, out, new PrintWriter(System.err, true));
+        out.flush();
+        System.exit(code);
     }
 
     /** Runs the command line with the given streams; returns the exit code. */
