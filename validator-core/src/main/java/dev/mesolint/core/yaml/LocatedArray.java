@@ -1,6 +1,7 @@
 package dev.mesolint.core.yaml;
 
 import dev.mesolint.core.source.Location;
+import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.nodes.Node;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ArrayNode;
@@ -18,7 +19,12 @@ final class LocatedArray extends ArrayNode {
     }
 
     void add(JsonNode value, Node valueNode) {
-        values.add(valueNode);
+        add(value, valueNode.getStartMark(), valueNode.getEndMark());
+    }
+
+    /** As above, with the marks of the element's first and last events. */
+    void add(JsonNode value, Mark start, Mark end) {
+        values.add(start, end);
         add(value);
     }
 

@@ -2,6 +2,7 @@ package dev.mesolint.core.yaml;
 
 import dev.mesolint.core.source.Location;
 import java.util.Arrays;
+import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.nodes.Node;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -27,13 +28,19 @@ final class LocatedObject extends ObjectNode {
 
     /** Adds a property the object does not have yet, with the nodes its key and value were read from. */
     void add(String name, JsonNode value, Node keyNode, Node valueNode) {
+        add(name, value, keyNode.getStartMark(), keyNode.getEndMark(), valueNode.getStartMark(),
+                valueNode.getEndMark());
+    }
+
+    /** As above, with the marks of the key's event and of the value's first and last events. */
+    void add(String name, JsonNode value, Mark keyStart, Mark keyEnd, Mark valueStart, Mark valueEnd) {
         int index = keys.size();
         if (index == names.length) {
             names = Arrays.copyOf(names, index * 2);
         }
         names[index] = name;
-        keys.add(keyNode);
-        values.add(valueNode);
+        keys.add(keyStart, keyEnd);
+        values.add(valueStart, valueEnd);
         set(name, value);
     }
 
@@ -57,6 +64,10 @@ final class LocatedObject extends ObjectNode {
             }
         }
         return -1;
+    }
+
+    String name(int index) {
+        return names[index];
     }
 
     JsonNode child(int index) {

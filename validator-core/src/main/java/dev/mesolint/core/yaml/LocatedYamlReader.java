@@ -24,8 +24,9 @@ import org.yaml.snakeyaml.reader.StreamReader;
 import org.yaml.snakeyaml.resolver.Resolver;
 
 /**
- * Reads one YAML file safely into a {@link LocatedDocument}: size and text checks first, then SnakeYAML's composer
- * (no object construction, so no arbitrary types), then a located conversion to a JSON tree.
+ * Reads one YAML file safely into a {@link LocatedDocument}: size and text checks first, then SnakeYAML's parser
+ * (no object construction, so no arbitrary types) and a located JSON tree: built straight from the parser's events
+ * for a plain document ({@link DirectTreeBuilder}), else through SnakeYAML's composer and {@link NodeConverter}.
  *
  * <p>Thread-safe: every call builds its own parser.
  */
@@ -78,6 +79,19 @@ public final class LocatedYamlReader {
     }
 
     public LocatedDocument read(String text) throws YamlProblem {
+        // One pass from the parser's events for the plain documents nearly every programme is; anything else, and
+        // every problem, takes the composer's road below (DirectTreeBuilder says which).
+        LocatedDocument direct = direct(text);
+        return direct != null ? direct : composed(text);
+    }
+
+    /** The one-pass road alone: the document, or null where the general road must read it. */
+    LocatedDocument direct(String text) {
+        return DirectTreeBuilder.build(text, loaderOptions(), RESOLVER, limits);
+    }
+
+    /** The general road: SnakeYAML's composer, then {@link NodeConverter}; every problem is found and worded here. */
+    LocatedDocument composed(String text) throws YamlProblem {
         LoaderOptions options = loaderOptions();
         Node root;
         try {

@@ -205,8 +205,12 @@ final class NodeConverter {
     }
 
     private static JsonNode scalar(ScalarNode scalar, Tag tag) {
-        String text = scalar.getValue();
-        if (scalar.getScalarStyle() != DumperOptions.ScalarStyle.PLAIN || tag == Tag.STR
+        return scalar(scalar.getValue(), scalar.getScalarStyle(), tag);
+    }
+
+    /** A scalar's JSON value: quoted or tagged as text stays text; a plain one is typed as the class comment says. */
+    static JsonNode scalar(String text, DumperOptions.ScalarStyle style, Tag tag) {
+        if (style != DumperOptions.ScalarStyle.PLAIN || tag == Tag.STR
                 || (tag != PlainScalarResolver.PLAIN && tag.equals(Tag.STR))) {
             return JSON.stringNode(text);
         }

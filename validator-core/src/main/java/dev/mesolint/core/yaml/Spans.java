@@ -20,12 +20,15 @@ final class Spans {
 
     /** Appends the span of {@code node}. */
     void add(Node node) {
+        add(node.getStartMark(), node.getEndMark());
+    }
+
+    /** Appends the span from {@code start} to {@code end}, the marks of a node's first and last events. */
+    void add(Mark start, Mark end) {
         if ((count + 1) * 4 > ints.length) {
             ints = Arrays.copyOf(ints, ints.length * 2);
         }
         int at = count * 4;
-        Mark start = node.getStartMark();
-        Mark end = node.getEndMark();
         ints[at] = line(start);
         ints[at + 1] = column(start);
         ints[at + 2] = line(end);
@@ -44,8 +47,10 @@ final class Spans {
 
     /** The place of a node not kept in any container (the root, or a node named in a problem). */
     static Location of(Node node, String pointer) {
-        Mark start = node.getStartMark();
-        Mark end = node.getEndMark();
+        return of(node.getStartMark(), node.getEndMark(), pointer);
+    }
+
+    static Location of(Mark start, Mark end, String pointer) {
         return new Location(line(start), column(start), line(end), column(end), pointer);
     }
 
