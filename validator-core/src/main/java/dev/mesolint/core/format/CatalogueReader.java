@@ -29,19 +29,35 @@ public final class CatalogueReader {
         this.schema = catalogueSchema;
     }
 
-    /** The catalogue shipped in the core jar. A broken built-in catalogue is a defect: it fails loudly. */
+    /**
+     * The catalogue shipped in the core jar: from the build's pack of it ({@link PackedCatalogue}) when the pack was made
+     * from this very text, else read from the text. A broken built-in catalogue is a defect: it fails loudly.
+     */
     public Catalogue builtIn() {
+        byte[] text = builtInText();
+        return PackedCatalogue.builtIn(text).orElseGet(() -> Catalogue.of(readBuiltIn(text)));
+    }
+
+    /** The built-in catalogue's YAML text, as shipped. */
+    static byte[] builtInText() {
         try (InputStream in = CatalogueReader.class.getResourceAsStream(BUILT_IN)) {
             if (in == null) {
                 throw new IllegalStateException("the built-in catalogue is missing from the core jar");
             }
-            CatalogueFile file = read(reader.read(in.readAllBytes()), "built-in");
+            return in.readAllBytes();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The entries of the built-in catalogue's text, read, validated and bound like any catalogue file. */
+    List<Exercise> readBuiltIn(byte[] text) {
+        try {
+            CatalogueFile file = read(reader.read(text), "built-in");
             if (!file.ok()) {
                 throw new IllegalStateException("the built-in catalogue is invalid: " + file.violations());
             }
-            return Catalogue.of(file.entries());
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            return file.entries();
         } catch (YamlProblem e) {
             throw new IllegalStateException("the built-in catalogue does not parse: " + e.getMessage(), e);
         }
