@@ -97,7 +97,10 @@ public final class SafeText {
 
     /** Printable characters only: no C0/C1 controls, no line or paragraph separators, no bidirectional controls. */
     private static boolean allowedInLine(char c) {
-        if (c < 0x20 || c >= 0x7f && c <= 0x9f) {
+        if (c >= 0x20 && c < 0x7f) {
+            return true; // printable ASCII, nearly every character a report writes: no table lookup
+        }
+        if (c < 0x20 || c <= 0x9f) {
             return false;
         }
         return switch (Character.getType(c)) {

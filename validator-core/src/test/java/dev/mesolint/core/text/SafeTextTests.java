@@ -19,6 +19,17 @@ class SafeTextTests {
     }
 
     @Test
+    void printableAsciiIsKeptAndTheControlsAroundItAreEscaped() {
+        StringBuilder printable = new StringBuilder();
+        for (char c = 0x20; c < 0x7f; c++) {
+            printable.append(c);
+        }
+        assertEquals(printable.toString(), SafeText.line(printable.toString()));
+        // the edges of the control ranges (Unicode general category Cc: U+0000-001F, U+007F-009F); NBSP is printable
+        assertEquals("\\u001f \\u007f \\u0080 \\u009f \u00a0~", SafeText.line("\u001f \u007f \u0080 \u009f \u00a0~"));
+    }
+
+    @Test
     void theDataFormReplacesWhatUtf8AndXmlCannotHold() {
         // XML 1.0, section 2.2 (Char): tab, LF and CR are the only C0 controls allowed.
         assertEquals("x \uFFFD y", SafeText.data("x \ud800 y"));
