@@ -31,10 +31,20 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
             .thenComparing(Finding::message);
 
     public FileReport {
-        findings = findings.stream().sorted(ORDER).toList();
+        findings = inOrder(findings);
         java.util.Objects.requireNonNull(timing, "timing");
         java.util.Objects.requireNonNull(identity, "identity");
         java.util.Objects.requireNonNull(checkedAs, "checkedAs");
+    }
+
+    /** {@code findings} in {@link #ORDER}; a list already in it (a report remade with its timing, say) as it is. */
+    private static List<Finding> inOrder(List<Finding> findings) {
+        for (int i = 1; i < findings.size(); i++) {
+            if (ORDER.compare(findings.get(i - 1), findings.get(i)) > 0) {
+                return findings.stream().sorted(ORDER).toList();
+            }
+        }
+        return List.copyOf(findings);
     }
 
     /** The report of a programme file (or of a file that did not load as one). */
