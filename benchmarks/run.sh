@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Whole-process benchmark of `mesolint check` against the parse floor (read + compose with SnakeYAML's safe
 # loader, nothing else), on deterministic corpora. Prints medians of interleaved runs, wall and CPU time, and
-# the ratio check/floor for each corpus; then 1 vs 2 processors, and one file through the launcher with and
+# the ratio check/floor for each corpus (of the medians, and the median of each pair's own ratio); then 1 vs 2 processors, and one file through the launcher with and
 # without its class-data archive. Timing is never part of `mvn verify`: run this by hand on a quiet machine.
 #
 # Usage: benchmarks/run.sh [--runs N] [--quick]
@@ -71,16 +71,20 @@ compare() {
   for _ in $(seq 1 "$runs"); do
     once "$tmp/a" $prefix "${floor_cmd[@]}" "$@"; once "$tmp/b" $prefix "${check_cmd[@]}" "$@"
   done
-  local fw fc cw cc
+  local fw fc cw cc paired
   fw=$(col "$tmp/a" 1); fc=$(col "$tmp/a" 2); cw=$(col "$tmp/b" 1); cc=$(col "$tmp/b" 2)
-  printf "%-28s %6s %9s %9s %9s %9s %7s %7s\n" "$label" "$files" "$fw" "$cw" "$(ratio "$cw" "$fw")" \
-    "$fc" "$cc" "$(ratio "$cc" "$fc")"
+  # The median of each run's own check/floor CPU ratio: a shared machine's speed drifts between runs, and the two
+  # runs of a pair are seconds apart.
+  paired=$(paste -d' ' "$tmp/a" "$tmp/b" | awk '{printf "%.4f\n", ($2 > 0 ? $4 / $2 : 0)}' | median)
+  printf "%-28s %6s %9s %9s %9s %9s %7s %7s %7.2f\n" "$label" "$files" "$fw" "$cw" "$(ratio "$cw" "$fw")" \
+    "$fc" "$cc" "$(ratio "$cc" "$fc")" "$paired"
   echo "$fw $cw $fc $cc" >"$tmp/last"
 }
 
 echo
 echo "mesolint benchmark: $(nproc) processors, $runs runs each (medians), $(java -version 2>&1 | head -1)"
-printf "%-28s %6s %9s %9s %9s %9s %7s %7s\n" corpus files "floor s" "check s" "wall x" "floor cpu" "check" "cpu x"
+printf "%-28s %6s %9s %9s %9s %9s %7s %7s %7s\n" corpus files "floor s" "check s" "wall x" "floor cpu" "check" "cpu x" \
+  "paired"
 compare "clean library" "" "$work/clean"
 compare "finding-heavy library" "" "$work/heavy"
 compare "one large programme" "" "$work/large"
