@@ -44,7 +44,7 @@ public record FileReport(String displayPath, Optional<Programme> programme, Stri
                 return findings.stream().sorted(ORDER).toList();
             }
         }
-        return List.copyOf(findings);
+        return findings.stream().toList(); // the same unmodifiable copy as before, without the sort
     }
 
     /** The report of a programme file (or of a file that did not load as one). */
