@@ -55,16 +55,19 @@ public record ProgrammeMetrics(String programmeId, LoadUnit units, ModelParamete
 
     private static Map<Muscle, String> directlyTrained(List<WeekMetrics> weeks, ExerciseTable exercises) {
         Map<Muscle, String> direct = new EnumMap<>(Muscle.class);
-        // A week's lifts are its sets' exercises in the order each first appears, so reading them in week order
-        // meets every exercise first where its first set is.
+        // The sets in the order they are done, week by week: each muscle goes to the exercise of the first set that
+        // has it as a prime mover (a later set of the same exercise changes nothing). Read from the sets, not the
+        // per-lift figures, which are worked out only when a rule or report reads them.
         for (WeekMetrics week : weeks) {
-            for (LiftWeek lift : week.lifts()) {
-                ExerciseFigures exercise = exercises.find(lift.exerciseId());
-                if (exercise == null) {
-                    continue;
-                }
-                for (Muscle muscle : exercise.primeMovers) {
-                    direct.putIfAbsent(muscle, exercise.exercise.id());
+            for (SessionMetrics session : week.sessions()) {
+                for (SetMetrics set : session.sets()) {
+                    ExerciseFigures exercise = exercises.find(set.exerciseId());
+                    if (exercise == null) {
+                        continue;
+                    }
+                    for (Muscle muscle : exercise.primeMovers) {
+                        direct.putIfAbsent(muscle, exercise.exercise.id());
+                    }
                 }
             }
         }

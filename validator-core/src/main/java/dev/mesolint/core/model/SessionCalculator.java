@@ -111,8 +111,10 @@ final class SessionCalculator {
             tallies.add(exercise, effort.known(), setWork.hard, stimulatingReps, muscleStimulus);
             sets.add(metrics(planned, exercise, setWork, stimulatingReps, atStart, muscleStimulus));
         }
+        List<SetMetrics> done = List.copyOf(sets);
+        // Only the strength profile's rule and the reports read the per-lift figures: worked out when first read.
         return new SessionMetrics(session.day(), session.name(), session.location(), seconds / 60,
-                tallies.toSessions(dose), sets, volumeLoad, strength.perSession(sets));
+                tallies.toSessions(dose), done, volumeLoad, new WorkedOutList<>(() -> strength.perSession(done)));
     }
 
     /** A loaded carry is walked at about 1 m/s (from memory; a brisk walk under load). */

@@ -23,7 +23,7 @@ public record SessionMetrics(int day, String name, Location location, double min
     public SessionMetrics {
         muscles = muscles.isEmpty() ? Map.of() : Collections.unmodifiableMap(new EnumMap<>(muscles));
         sets = List.copyOf(sets);
-        lifts = List.copyOf(lifts);
+        lifts = WorkedOutList.keep(lifts);
     }
 
     /** The lift's reps per intensity zone in this session; empty when the session does not do it. */

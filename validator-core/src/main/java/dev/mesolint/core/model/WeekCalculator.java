@@ -44,8 +44,9 @@ final class WeekCalculator {
             muscles.put(muscle, muscleWeek(muscle, computed));
         }
         double volumeLoad = computed.stream().mapToDouble(SessionMetrics::volumeLoad).sum();
-        return new WeekMetrics(week.number(), week.deload(), week.location(), muscles, computed, volumeLoad, Map.of(),
-                Map.of(), strength.perWeek(week.number(), computed));
+        List<SessionMetrics> done = List.copyOf(computed);
+        return new WeekMetrics(week.number(), week.deload(), week.location(), muscles, done, volumeLoad, Map.of(),
+                Map.of(), new WorkedOutList<>(() -> strength.perWeek(week.number(), done)));
     }
 
     private MuscleWeek muscleWeek(Muscle muscle, List<SessionMetrics> computed) {

@@ -33,7 +33,7 @@ public record WeekMetrics(int number, boolean deload, Location location, Map<Mus
         sessions = List.copyOf(sessions);
         acuteChronic = copy(acuteChronic);
         change = copy(change);
-        lifts = List.copyOf(lifts);
+        lifts = WorkedOutList.keep(lifts);
     }
 
     private static <V> Map<Muscle, V> copy(Map<Muscle, V> map) {
