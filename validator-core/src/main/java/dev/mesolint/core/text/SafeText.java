@@ -100,7 +100,7 @@ public final class SafeText {
         if (c >= 0x20 && c < 0x7f) {
             return true; // printable ASCII, nearly every character a report writes: no table lookup
         }
-        if (c < 0x20 || c <= 0x9f) {
+        if (c <= 0x9f) { // C0 controls, DEL and C1 controls
             return false;
         }
         return switch (Character.getType(c)) {

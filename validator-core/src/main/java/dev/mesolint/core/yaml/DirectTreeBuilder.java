@@ -27,9 +27,6 @@ import tools.jackson.databind.JsonNode;
  * and a tuple per value, an identity set per collection) where that graph could only have been converted one way.
  */
 final class DirectTreeBuilder {
-    /** Mappings up to this size look for a repeated key by scanning; larger ones by hashing (as the converter). */
-    private static final int SCANNED_KEYS = 16;
-
     /** Thrown to leave a document for the general road; one instance, no stack trace, never seen outside. */
     private static final class NotHere extends RuntimeException {
         private static final long serialVersionUID = 1L;
@@ -61,10 +58,8 @@ final class DirectTreeBuilder {
     static LocatedDocument build(String text, LoaderOptions options, Resolver resolver, YamlLimits limits) {
         try {
             return new DirectTreeBuilder(text, options, resolver, limits).document();
-        } catch (NotHere e) {
-            return null;
         } catch (RuntimeException | StackOverflowError e) {
-            // A syntax error or a limit the parser enforces: the general road meets it again and reports it.
+            // NotHere, a syntax error or a limit the parser enforces: the general road meets it again and reports it.
             return null;
         }
     }
@@ -160,10 +155,10 @@ final class DirectTreeBuilder {
             }
             plainTag(key);
             String name = KeyNames.canonical(key.getValue());
-            if (++count > SCANNED_KEYS) {
+            if (++count > NodeConverter.SCANNED_KEYS) { // then by hashing, as the converter does
                 if (seen == null) {
                     seen = new HashSet<>();
-                    for (int i = 0; i < SCANNED_KEYS; i++) {
+                    for (int i = 0; i < NodeConverter.SCANNED_KEYS; i++) {
                         seen.add(object.name(i));
                     }
                 }

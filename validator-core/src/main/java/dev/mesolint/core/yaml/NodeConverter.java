@@ -33,7 +33,7 @@ final class NodeConverter {
     private static final Set<Tag> STANDARD = Set.of(Tag.STR, Tag.INT, Tag.FLOAT, Tag.BOOL, Tag.NULL, Tag.TIMESTAMP,
             Tag.MAP, Tag.SEQ, Tag.MERGE, Tag.OMAP, Tag.PAIRS, Tag.SET);
     /** Mappings up to this size look for a repeated key by scanning; larger ones by hashing. */
-    private static final int SCANNED_KEYS = 16;
+    static final int SCANNED_KEYS = 16;
 
     private final YamlLimits limits;
     /** The pointer segments (a key or an index) down to the node being converted, for problems' pointers. */
