@@ -465,9 +465,22 @@ final class SchemaShortcut {
         }
     }
 
-    /** Number bounds, held both exactly and as doubles: certain only where both readings agree. */
-    private static final class Numbers {
+    /**
+     * Number bounds, held both exactly and as doubles: certain only where both readings agree. A whole number within
+     * 2^53 (nearly every number a programme holds: sets, reps, RIR) is a double exactly, so against a bound that is
+     * a double exactly both readings are one double comparison, and its multiple of a divisor p/q (in lowest terms)
+     * is exact when p divides it; the decimal arithmetic is kept for the other numbers.
+     */
+    static final class Numbers {
+        /** The largest magnitude up to which every whole number is a double exactly. */
+        private static final long EXACT_IN_DOUBLE = 1L << 53;
+
         private Numbers() {
+        }
+
+        /** A whole number held as an int or a long, of at most 2^53 either way. */
+        static boolean smallWhole(JsonNode node) {
+            return (node.isInt() || node.isLong()) && Math.abs(node.longValue()) <= EXACT_IN_DOUBLE;
         }
 
         static Test bound(String keyword, JsonNode value) throws UnknownForm {
@@ -476,15 +489,20 @@ final class SchemaShortcut {
             }
             BigDecimal exact = value.decimalValue();
             double approximate = value.doubleValue();
+            boolean boundIsDouble = Double.isFinite(approximate) && exact.compareTo(new BigDecimal(approximate)) == 0;
             return switch (keyword) {
-                case "minimum" -> node -> !node.isNumber()
-                        || node.decimalValue().compareTo(exact) >= 0 && node.doubleValue() >= approximate;
-                case "maximum" -> node -> !node.isNumber()
-                        || node.decimalValue().compareTo(exact) <= 0 && node.doubleValue() <= approximate;
-                case "exclusiveMinimum" -> node -> !node.isNumber()
-                        || node.decimalValue().compareTo(exact) > 0 && node.doubleValue() > approximate;
-                default -> node -> !node.isNumber()
-                        || node.decimalValue().compareTo(exact) < 0 && node.doubleValue() < approximate;
+                case "minimum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
+                        ? node.longValue() >= approximate
+                        : node.decimalValue().compareTo(exact) >= 0 && node.doubleValue() >= approximate);
+                case "maximum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
+                        ? node.longValue() <= approximate
+                        : node.decimalValue().compareTo(exact) <= 0 && node.doubleValue() <= approximate);
+                case "exclusiveMinimum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
+                        ? node.longValue() > approximate
+                        : node.decimalValue().compareTo(exact) > 0 && node.doubleValue() > approximate);
+                default -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
+                        ? node.longValue() < approximate
+                        : node.decimalValue().compareTo(exact) < 0 && node.doubleValue() < approximate);
             };
         }
 
@@ -494,16 +512,43 @@ final class SchemaShortcut {
             }
             BigDecimal exact = value.decimalValue();
             double approximate = value.doubleValue();
+            long numerator = numeratorInLowestTerms(exact);
             return node -> {
                 if (!node.isNumber()) {
                     return true;
                 }
-                if (node.decimalValue().remainder(exact).signum() != 0) {
+                boolean exactlyAMultiple = numerator > 0 && smallWhole(node) ? node.longValue() % numerator == 0
+                        : node.decimalValue().remainder(exact).signum() == 0;
+                if (!exactlyAMultiple) {
                     return false;
                 }
                 double quotient = node.doubleValue() / approximate;
                 return !Double.isInfinite(quotient) && quotient == Math.rint(quotient);
             };
+        }
+
+        /** p of {@code positive} = p/q in lowest terms; 0 when p or q does not fit a long. */
+        static long numeratorInLowestTerms(BigDecimal positive) {
+            BigDecimal d = positive.stripTrailingZeros();
+            if (d.scale() <= 0) {
+                BigDecimal whole = d.setScale(0);
+                return whole.unscaledValue().bitLength() < 64 ? whole.longValueExact() : 0;
+            }
+            if (d.scale() > 18 || d.unscaledValue().bitLength() >= 64) {
+                return 0;
+            }
+            long unscaled = d.unscaledValue().longValueExact();
+            long denominator = BigDecimal.TEN.pow(d.scale()).longValueExact();
+            return unscaled / gcd(unscaled, denominator);
+        }
+
+        private static long gcd(long a, long b) {
+            while (b != 0) {
+                long t = a % b;
+                a = b;
+                b = t;
+            }
+            return a;
         }
     }
 

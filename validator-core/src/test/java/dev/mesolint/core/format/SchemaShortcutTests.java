@@ -133,6 +133,61 @@ class SchemaShortcutTests {
         assertFalse(positive.certainlyValid(JSON.numberNode(new BigDecimal("1E-400"))), "rounds to 0 as a double");
     }
 
+    /** Bounds and divisors as a schema may write them: whole, halves, tenths, thirds, huge and tiny. */
+    private static final List<String> LIMITS = List.of("0", "-19", "3", "10", "0.5", "2.5", "0.1", "0.3333",
+            "7", "1E+20", "9007199254740993", "1E-400", "0.25", "12.5");
+
+    @Property(tries = 3000)
+    void aWholeNumberIsReadByItsFastPathAsTheDecimalReadingReadsIt(@ForAll long seed) throws Exception {
+        // The reference is the exact reading and the double reading, both required (the class comment): the fast
+        // path for whole numbers within 2^53 must give the same verdict for every bound and divisor.
+        Random random = new Random(seed);
+        long magnitude = switch (random.nextInt(4)) {
+            case 0 -> random.nextInt(41) - 20;
+            case 1 -> random.nextInt(2_001) - 1_000;
+            case 2 -> (1L << 53) - random.nextInt(5);
+            default -> random.nextLong() >> random.nextInt(64);
+        };
+        JsonNode number = random.nextBoolean() && magnitude == (int) magnitude ? JSON.numberNode((int) magnitude)
+                : JSON.numberNode(magnitude);
+        BigDecimal exactValue = BigDecimal.valueOf(magnitude);
+        double doubleValue = number.doubleValue();
+        String limitText = LIMITS.get(random.nextInt(LIMITS.size()));
+        JsonNode limit = JSON.numberNode(new BigDecimal(limitText));
+        BigDecimal exact = limit.decimalValue();
+        double approximate = limit.doubleValue();
+        int order = exactValue.compareTo(exact);
+        assertEquals(order >= 0 && doubleValue >= approximate,
+                SchemaShortcut.Numbers.bound("minimum", limit).passes(number), magnitude + " minimum " + limitText);
+        assertEquals(order <= 0 && doubleValue <= approximate,
+                SchemaShortcut.Numbers.bound("maximum", limit).passes(number), magnitude + " maximum " + limitText);
+        assertEquals(order > 0 && doubleValue > approximate,
+                SchemaShortcut.Numbers.bound("exclusiveMinimum", limit).passes(number), magnitude + " > " + limitText);
+        assertEquals(order < 0 && doubleValue < approximate,
+                SchemaShortcut.Numbers.bound("exclusiveMaximum", limit).passes(number), magnitude + " < " + limitText);
+        if (exact.signum() > 0) {
+            double quotient = doubleValue / approximate;
+            boolean multiple = exactValue.remainder(exact).signum() == 0 && !Double.isInfinite(quotient)
+                    && quotient == Math.rint(quotient);
+            assertEquals(multiple, SchemaShortcut.Numbers.multipleOf(limit).passes(number),
+                    magnitude + " multipleOf " + limitText);
+        }
+    }
+
+    @Test
+    void aDivisorsNumeratorInLowestTermsIsExact() {
+        // 0.5 = 1/2, 2.5 = 5/2, 0.25 = 1/4, 12.5 = 25/2, 0.3333 = 3333/10000, 3 = 3/1; arithmetic (common practice)
+        assertEquals(1, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("0.5")));
+        assertEquals(5, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("2.5")));
+        assertEquals(1, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("0.25")));
+        assertEquals(25, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("12.50")));
+        assertEquals(3333, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("0.3333")));
+        assertEquals(3, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("3")));
+        assertEquals(300, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("3E+2")));
+        assertEquals(0, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("1E+30")), "too large: no path");
+        assertEquals(0, SchemaShortcut.Numbers.numeratorInLowestTerms(new BigDecimal("1E-30")), "too fine: no path");
+    }
+
     @Test
     void aSchemaWithAFormItDoesNotKnowTurnsTheShortcutOff() {
         assertEquals(Optional.empty(),
