@@ -53,8 +53,8 @@ public final class Checker {
         this.request = request;
         this.rules = List.copyOf(rules);
         this.reader = new LocatedYamlReader(request.limits());
-        // The catalogue's schema first: the programme's may still be compiling in the background (CheckRun).
-        CatalogueReader catalogues = new CatalogueReader(reader, FormatSchema.load(FormatSchema.CATALOGUE));
+        // The catalogue's schema only when a catalogue text is read: the built-in catalogue comes from its pack.
+        CatalogueReader catalogues = new CatalogueReader(reader, () -> FormatSchema.load(FormatSchema.CATALOGUE));
         this.programmeSchema = FormatSchema.load(FormatSchema.PROGRAMME);
         Catalogue combined = catalogues.builtIn();
         List<FileReport> problems = new ArrayList<>();

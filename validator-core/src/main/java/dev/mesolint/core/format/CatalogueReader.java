@@ -16,15 +16,22 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Supplier;
 
 /** Reads catalogue files (the built-in one and a repository's own) through the same safe, located path. */
 public final class CatalogueReader {
     public static final String BUILT_IN = "/dev/mesolint/catalogue/exercises.yaml";
 
     private final LocatedYamlReader reader;
-    private final FormatSchema schema;
+    /** Asked for when a catalogue text is read: a run whose only catalogue is the built-in pack never loads it. */
+    private final Supplier<FormatSchema> schema;
 
     public CatalogueReader(LocatedYamlReader reader, FormatSchema catalogueSchema) {
+        this(reader, () -> catalogueSchema);
+    }
+
+    /** A reader that loads the catalogue schema when it first reads a catalogue text. */
+    public CatalogueReader(LocatedYamlReader reader, Supplier<FormatSchema> catalogueSchema) {
         this.reader = reader;
         this.schema = catalogueSchema;
     }
@@ -78,7 +85,7 @@ public final class CatalogueReader {
 
     /** Reads a catalogue document parsed elsewhere (a catalogue file found among the programmes, say). */
     public CatalogueFile read(LocatedDocument document, String displayPath) {
-        List<Violation> violations = new ArrayList<>(schema.validate(document));
+        List<Violation> violations = new ArrayList<>(schema.get().validate(document));
         if (!violations.isEmpty()) {
             return new CatalogueFile(displayPath, List.of(), violations, FrameworkRules.SCHEMA);
         }
