@@ -26,7 +26,7 @@ import java.util.Map;
 public final class FileIndex {
     private static final List<Muscle> NO_MUSCLES = List.of();
 
-    private final ExerciseLookups<Exercise> exercises;
+    private final ExerciseLookups<ExerciseCredits> exercises;
     private final List<Week> weeks;
     private final ModelParameters parameters;
     private final List<WeekMetrics> figures;
@@ -36,7 +36,7 @@ public final class FileIndex {
     private SetSummary sets;
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
-        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).orElse(null));
+        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseCredits::new).orElse(null));
         this.weeks = weeks;
         this.parameters = parameters;
         this.figures = figures;
@@ -75,6 +75,12 @@ public final class FileIndex {
 
     /** The entry of {@code id} in the file's catalogue (built-in, repository and programme entries); null if none. */
     public Exercise exercise(String id) {
+        ExerciseCredits credits = exercises.get(id);
+        return credits == null ? null : credits.exercise();
+    }
+
+    /** The credited muscles of the entry of {@code id}, as arrays; null when the file's catalogue has no such id. */
+    public ExerciseCredits credits(String id) {
         return exercises.get(id);
     }
 

@@ -1,6 +1,5 @@
 package dev.mesolint.core.rules;
 
-import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
@@ -8,6 +7,7 @@ import dev.mesolint.core.finding.Subject;
 import dev.mesolint.core.model.SessionMetrics;
 import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
+import dev.mesolint.core.rule.ExerciseCredits;
 import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
 import dev.mesolint.core.rule.RuleContext;
@@ -141,10 +141,10 @@ public final class VolumeSpikeRule implements Rule {
         int[] sets = new int[MUSCLES.length];
         for (SessionMetrics session : week.sessions()) {
             for (SetMetrics set : session.sets()) {
-                Exercise exercise = context.exerciseOrNull(set.exerciseId());
-                if (exercise != null) {
-                    for (Muscle muscle : context.index().primeMovers(exercise)) {
-                        sets[muscle.ordinal()]++;
+                ExerciseCredits credits = context.index().credits(set.exerciseId());
+                if (credits != null) {
+                    for (int p = 0; p < credits.primeMoverCount(); p++) {
+                        sets[credits.primeMoverOrdinal(p)]++;
                     }
                 }
             }

@@ -1,6 +1,5 @@
 package dev.mesolint.core.rules;
 
-import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.finding.Facts;
 import dev.mesolint.core.finding.Severity;
@@ -10,6 +9,7 @@ import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Waiver;
 import dev.mesolint.core.programme.Week;
+import dev.mesolint.core.rule.ExerciseCredits;
 import dev.mesolint.core.rule.Occurrences;
 import dev.mesolint.core.rule.Places;
 import dev.mesolint.core.rule.Rule;
@@ -174,15 +174,15 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
         Counted counted = new Counted(new double[MUSCLES], new double[MUSCLES]);
         for (SessionMetrics session : week.sessions()) {
             for (SetMetrics set : session.sets()) {
-                Exercise exercise = context.exerciseOrNull(set.exerciseId());
-                if (exercise == null) {
+                ExerciseCredits credits = context.index().credits(set.exerciseId());
+                if (credits == null) {
                     continue;
                 }
                 boolean close = set.effortKnown() && set.rir().getAsDouble() <= maxRir;
                 double[] into = close ? counted.close : StrengthSets.notJudged(context, set) ? counted.strength : null;
                 if (into != null) {
-                    for (Map.Entry<Muscle, Double> credit : exercise.muscles().entrySet()) {
-                        into[credit.getKey().ordinal()] += credit.getValue();
+                    for (int k = 0; k < credits.size(); k++) {
+                        into[credits.ordinal(k)] += credits.credit(k);
                     }
                 }
             }
