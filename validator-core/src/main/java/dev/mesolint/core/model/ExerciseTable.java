@@ -11,7 +11,8 @@ final class ExerciseTable {
     private final ExerciseLookups<ExerciseFigures> figures;
 
     ExerciseTable(Catalogue catalogue) {
-        this.figures = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseFigures::new).orElse(null));
+        this.figures = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseFigures::new).orElse(null),
+                f -> f.exercise.id());
     }
 
     /** The exercise's figures; null when the catalogue does not know it (its sets are left out). */

@@ -36,7 +36,8 @@ public final class FileIndex {
     private SetSummary sets;
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
-        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseCredits::new).orElse(null));
+        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseCredits::new).orElse(null),
+                c -> c.exercise().id());
         this.weeks = weeks;
         this.parameters = parameters;
         this.figures = figures;
