@@ -25,6 +25,7 @@ public record Exercise(String id, String name, ExerciseKind kind, MovementPatter
     public static final double SYNERGIST = 0.5;
 
     public Exercise {
+        id = ExerciseIds.shared(id);
         // insertion order kept: the first muscle written with credit 1 is the prime mover
         muscles = Collections.unmodifiableMap(new LinkedHashMap<>(muscles));
         regions = regions.isEmpty() ? Set.of() : Collections.unmodifiableSet(EnumSet.copyOf(regions));

@@ -179,7 +179,8 @@ final class SchemaShortcut {
             Iterator<String> names = properties.propertyNames().iterator();
             while (names.hasNext()) {
                 String name = names.next();
-                named.put(name, compile(properties.get(name), false));
+                // the JVM's instance, the one a document's keys are read as (KeyNames): found by reference
+                named.put(name.intern(), compile(properties.get(name), false));
             }
             Test others = additional == null ? ALWAYS : compile(additional, false);
             return node -> {
@@ -199,7 +200,7 @@ final class SchemaShortcut {
         }
 
         private static Test required(JsonNode names) throws UnknownForm {
-            List<String> required = texts(names, "required");
+            List<String> required = texts(names, "required").stream().map(String::intern).toList();
             return node -> {
                 if (!node.isObject()) {
                     return true;
@@ -672,7 +673,7 @@ final class SchemaShortcut {
             Iterator<String> names = properties.propertyNames().iterator();
             while (names.hasNext()) {
                 String name = names.next();
-                named.put(name, decisiveValue(properties.get(name)));
+                named.put(name.intern(), decisiveValue(properties.get(name)));
             }
             return node -> {
                 if (!node.isObject()) {

@@ -1,6 +1,7 @@
 package dev.mesolint.core.programme;
 
 import dev.mesolint.core.catalogue.Exercise;
+import dev.mesolint.core.catalogue.ExerciseIds;
 import dev.mesolint.core.catalogue.Role;
 import dev.mesolint.core.source.Location;
 import java.util.List;
@@ -37,6 +38,7 @@ public record ExerciseWork(String exerciseId, int warmUpSets, List<SetPrescripti
 
 
     public ExerciseWork {
+        exerciseId = ExerciseIds.shared(exerciseId);
         sets = List.copyOf(sets);
         waivers = List.copyOf(waivers);
     }

@@ -58,8 +58,9 @@ final class LocatedObject extends ObjectNode {
     /** The property named {@code name}, else -1. */
     int indexOf(String name) {
         int count = keys.size();
+        int hash = name.hashCode(); // kept by each string: a quick no before any character is compared
         for (int i = 0; i < count; i++) {
-            if (names[i].equals(name)) {
+            if (names[i] == name || names[i].hashCode() == hash && names[i].equals(name)) {
                 return i;
             }
         }
