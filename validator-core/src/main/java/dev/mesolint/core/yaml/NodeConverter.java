@@ -214,15 +214,17 @@ final class NodeConverter {
                 || (tag != PlainScalarResolver.PLAIN && tag.equals(Tag.STR))) {
             return JSON.stringNode(text);
         }
-        switch (text) {
-            case "", "~", "null", "Null", "NULL":
-                return JSON.nullNode();
-            case "true", "True", "TRUE":
-                return JSON.booleanNode(true);
-            case "false", "False", "FALSE":
-                return JSON.booleanNode(false);
-            default:
-                break;
+        if (mayBeNullOrBoolean(text)) {
+            switch (text) {
+                case "", "~", "null", "Null", "NULL":
+                    return JSON.nullNode();
+                case "true", "True", "TRUE":
+                    return JSON.booleanNode(true);
+                case "false", "False", "FALSE":
+                    return JSON.booleanNode(false);
+                default:
+                    break;
+            }
         }
         switch (PlainNumbers.kind(text)) {
             case INTEGER:
@@ -232,6 +234,22 @@ final class NodeConverter {
             default:
                 return JSON.stringNode(text);
         }
+    }
+
+    /**
+     * False for text that cannot be one of the null and boolean words: nearly every scalar (ids, numbers, "90s"),
+     * told apart by length and first letter before a string switch would hash it.
+     */
+    private static boolean mayBeNullOrBoolean(String text) {
+        if (text.length() > 5) {
+            return false;
+        }
+        if (text.isEmpty()) {
+            return true;
+        }
+        char first = text.charAt(0);
+        return first == '~' || first == 'n' || first == 'N' || first == 't' || first == 'T' || first == 'f'
+                || first == 'F';
     }
 
     /**

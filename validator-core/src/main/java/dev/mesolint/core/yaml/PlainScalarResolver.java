@@ -26,7 +26,8 @@ final class PlainScalarResolver extends Resolver {
     @Override
     public Tag resolve(NodeId kind, String value, boolean implicit) {
         if (kind == NodeId.scalar && implicit) {
-            boolean merge = value.length() <= 2 && (value.equals("<<") || value.equals("="));
+            boolean merge = value.length() == 2 ? value.charAt(0) == '<' && value.charAt(1) == '<'
+                    : value.length() == 1 && value.charAt(0) == '=';
             return merge ? YAML_11.resolve(kind, value, true) : PLAIN;
         }
         return super.resolve(kind, value, implicit);
