@@ -4,6 +4,7 @@ import dev.mesolint.core.catalogue.Catalogue;
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.ExerciseLookups;
 import dev.mesolint.core.catalogue.Muscle;
+import dev.mesolint.core.catalogue.PerEntry;
 import dev.mesolint.core.model.ModelParameters;
 import dev.mesolint.core.model.RestGap;
 import dev.mesolint.core.model.SessionMetrics;
@@ -25,6 +26,9 @@ import java.util.Map;
  */
 public final class FileIndex {
     private static final List<Muscle> NO_MUSCLES = List.of();
+    /** Each entry's credit arrays, shared by every file of the run. */
+    private static final PerEntry<ExerciseCredits> CREDITS = new PerEntry<>(ExerciseCredits::new,
+            ExerciseCredits::exercise);
 
     private final ExerciseLookups<ExerciseCredits> exercises;
     private final List<Week> weeks;
@@ -36,7 +40,7 @@ public final class FileIndex {
     private SetSummary sets;
 
     FileIndex(Catalogue catalogue, List<Week> weeks, ModelParameters parameters, List<WeekMetrics> figures) {
-        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).map(ExerciseCredits::new).orElse(null),
+        this.exercises = new ExerciseLookups<>(id -> catalogue.find(id).map(CREDITS::of).orElse(null),
                 c -> c.exercise().id());
         this.weeks = weeks;
         this.parameters = parameters;
