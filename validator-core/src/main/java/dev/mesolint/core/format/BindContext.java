@@ -6,6 +6,7 @@ import dev.mesolint.core.value.InvalidValueException;
 import dev.mesolint.core.yaml.LocatedDocument;
 import dev.mesolint.core.yaml.Pointers;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -83,24 +84,48 @@ final class BindContext {
     /**
      * What each value parser made of a text, so that the few rests, loads and rep ranges a library repeats on every
      * set are parsed (by regular expression) once per run. The parsers are pure functions of the text and their
-     * values immutable; only values are kept, never refusals. Bounded in parsers and in texts per parser.
+     * values immutable; only values are kept, never refusals. Bounded in parsers and in texts per parser. The parsers
+     * (one method reference per call site) are found by reference in a short array, not hashed: a lambda's hash is
+     * its identity hash, which the JIT the check runs with asks the VM for, on every value of every set.
      */
     private static final class ParsedValues {
         private static final int MAX_PARSERS = 64;
         private static final int MAX_TEXTS = 1024;
-        private static final ConcurrentHashMap<ValueParser<?>, Map<String, Object>> BY_PARSER =
-                new ConcurrentHashMap<>();
+
+        private record Known(ValueParser<?> parser, Map<String, Object> values) {
+        }
+
+        /** Replaced whole when a parser is added, so that readers need no lock. */
+        private static volatile Known[] known = new Known[0];
 
         private ParsedValues() {
         }
 
         /** The parser's remembered values; null when no more parsers are remembered (a parser made per call). */
         static Map<String, Object> of(ValueParser<?> parser) {
-            Map<String, Object> known = BY_PARSER.get(parser);
-            if (known == null && BY_PARSER.size() < MAX_PARSERS) {
-                known = BY_PARSER.computeIfAbsent(parser, p -> new ConcurrentHashMap<>());
+            for (Known k : known) {
+                if (k.parser == parser) {
+                    return k.values;
+                }
             }
-            return known;
+            return add(parser);
+        }
+
+        private static synchronized Map<String, Object> add(ValueParser<?> parser) {
+            Known[] now = known;
+            for (Known k : now) {
+                if (k.parser == parser) {
+                    return k.values;
+                }
+            }
+            if (now.length >= MAX_PARSERS) {
+                return null;
+            }
+            Map<String, Object> values = new ConcurrentHashMap<>();
+            Known[] more = Arrays.copyOf(now, now.length + 1);
+            more[now.length] = new Known(parser, values);
+            known = more;
+            return values;
         }
 
         static void remember(Map<String, Object> known, String text, Object value) {

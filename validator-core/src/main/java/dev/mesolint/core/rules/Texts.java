@@ -4,12 +4,9 @@ import dev.mesolint.core.catalogue.Muscle;
 import dev.mesolint.core.rule.Ranges;
 import java.util.Collection;
 import java.util.TreeSet;
-import java.util.regex.Pattern;
 
 /** Number and list wording shared by the model rules' messages. */
 final class Texts {
-    private static final Pattern ELEVEN_OR_EIGHTEEN = Pattern.compile("1[18](\\.\\d+)?");
-
     private Texts() {
     }
 
@@ -36,8 +33,28 @@ final class Texts {
 
     /** {@code a 7-rep effort}, {@code an 11-rep effort}: the article for a number read aloud. */
     static String article(String number) {
-        boolean vowel = number.startsWith("8") || ELEVEN_OR_EIGHTEEN.matcher(number).matches();
+        boolean vowel = number.startsWith("8") || elevenOrEighteen(number);
         return vowel ? "an" : "a";
+    }
+
+    /** 11 or 18, with or without decimals ({@code 11}, {@code 18.5}): said with a vowel first. */
+    private static boolean elevenOrEighteen(String number) {
+        int n = number.length();
+        if (n < 2 || number.charAt(0) != '1' || number.charAt(1) != '1' && number.charAt(1) != '8') {
+            return false;
+        }
+        if (n == 2) {
+            return true;
+        }
+        if (number.charAt(2) != '.' || n == 3) {
+            return false;
+        }
+        for (int i = 3; i < n; i++) {
+            if (number.charAt(i) < '0' || number.charAt(i) > '9') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** {@code a 7-rep effort}, {@code an 11-rep effort}: reps to failure of a set, reps plus reserve. */

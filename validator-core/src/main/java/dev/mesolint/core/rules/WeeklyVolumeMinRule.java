@@ -152,7 +152,8 @@ public final class WeeklyVolumeMinRule implements Rule, WeeklyVolumeLimit {
 
     /** {@code hard set} for {@code hard sets}. */
     private static String singular(String noun) {
-        return noun.replaceFirst("sets", "set");
+        int at = noun.indexOf("sets"); // the first only, as the words are built
+        return at < 0 ? noun : noun.substring(0, at) + "set" + noun.substring(at + "sets".length());
     }
 
     /** The week as written ({@code - week: 2}), where the finding points. */
