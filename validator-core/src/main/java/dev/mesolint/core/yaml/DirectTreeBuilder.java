@@ -1,6 +1,5 @@
 package dev.mesolint.core.yaml;
 
-import java.io.StringReader;
 import java.util.HashSet;
 import java.util.Set;
 import org.yaml.snakeyaml.LoaderOptions;
@@ -12,7 +11,6 @@ import org.yaml.snakeyaml.nodes.NodeId;
 import org.yaml.snakeyaml.nodes.Tag;
 import org.yaml.snakeyaml.parser.Parser;
 import org.yaml.snakeyaml.parser.ParserImpl;
-import org.yaml.snakeyaml.reader.StreamReader;
 import org.yaml.snakeyaml.resolver.Resolver;
 import tools.jackson.databind.JsonNode;
 
@@ -48,7 +46,7 @@ final class DirectTreeBuilder {
     private Mark end;
 
     private DirectTreeBuilder(String text, LoaderOptions options, Resolver resolver, YamlLimits limits) {
-        this.parser = new ParserImpl(new StreamReader(new StringReader(text)), options);
+        this.parser = new ParserImpl(WholeTextReader.of(text), options);
         this.resolver = resolver;
         this.maxDepth = Math.min(limits.maxDepth(), options.getNestingDepthLimit()) - 1;
         this.maxNodes = limits.maxNodes() - 1;
