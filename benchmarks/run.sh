@@ -38,10 +38,7 @@ gen "$work/many" clean "$many_n" "${templates[@]}"
 # The check runs as users run it, through the README's launcher (C1 only, the serial collector, and the class-data
 # archive it trains on the bundled samples); the floor gets the same flags and an archive of its own, trained the
 # same way. The rows "without archives" run both as plain JVMs.
-jvm=(java -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:NewRatio=1 -XX:MaxTenuringThreshold=0
-  -XX:CompileCommand=quiet '-XX:CompileCommand=exclude,picocli.*::*'
-  '-XX:CompileCommand=exclude,jdk.internal.org.objectweb.asm.*::*' '-XX:CompileCommand=exclude,sun.reflect.annotation.*::*'
-  -Xshare:auto)
+jvm=(java -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:NewRatio=1 -XX:MaxTenuringThreshold=0 -Xshare:auto)
 "$here/mesolint" check "$here/sample-programs/programmes" >/dev/null 2>&1 || true # builds the launcher's archive
 floor_archive="$here/benchmarks/target/parse-floor.jsa"
 rm -f "$floor_archive"
@@ -116,7 +113,7 @@ echo "speedup 1 -> 2: floor ${floor_gain}x, check ${check_gain}x ($(awk -v a="$c
 echo
 echo "memory: 10,000 files with -Xmx256m"
 : >"$tmp/m"
-/usr/bin/time -f "%e s wall, %M KB peak" -o "$tmp/m" java -Xmx256m "${jvm[@]:1}" -jar "$cli" check "$work/many" >/dev/null 2>"$tmp/err" && rc=0 || rc=$?
+/usr/bin/time -f "%e s wall, %M KB peak" -o "$tmp/m" java -Xmx256m -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:NewRatio=1 -XX:MaxTenuringThreshold=0 -jar "$cli" check "$work/many" >/dev/null 2>"$tmp/err" && rc=0 || rc=$?
 echo "exit $rc, $(cat "$tmp/m")$(grep -q OutOfMemory "$tmp/err" && echo ', OUT OF MEMORY' || true)"
 
 echo
