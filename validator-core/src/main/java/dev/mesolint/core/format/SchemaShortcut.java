@@ -491,20 +491,40 @@ final class SchemaShortcut {
             BigDecimal exact = value.decimalValue();
             double approximate = value.doubleValue();
             boolean boundIsDouble = Double.isFinite(approximate) && exact.compareTo(new BigDecimal(approximate)) == 0;
-            return switch (keyword) {
-                case "minimum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
-                        ? node.longValue() >= approximate
-                        : node.decimalValue().compareTo(exact) >= 0 && node.doubleValue() >= approximate);
-                case "maximum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
-                        ? node.longValue() <= approximate
-                        : node.decimalValue().compareTo(exact) <= 0 && node.doubleValue() <= approximate);
-                case "exclusiveMinimum" -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
-                        ? node.longValue() > approximate
-                        : node.decimalValue().compareTo(exact) > 0 && node.doubleValue() > approximate);
-                default -> node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
-                        ? node.longValue() < approximate
-                        : node.decimalValue().compareTo(exact) < 0 && node.doubleValue() < approximate);
+            Side side = switch (keyword) {
+                case "minimum" -> Side.AT_LEAST;
+                case "maximum" -> Side.AT_MOST;
+                case "exclusiveMinimum" -> Side.ABOVE;
+                default -> Side.BELOW;
             };
+            return node -> !node.isNumber() || (boundIsDouble && smallWhole(node)
+                    ? side.holds(node.longValue(), approximate)
+                    : side.holds(node.decimalValue().compareTo(exact)) && side.holds(node.doubleValue(), approximate));
+        }
+
+        /** Which side of its bound a number must be on. */
+        private enum Side {
+            AT_LEAST, AT_MOST, ABOVE, BELOW;
+
+            /** For {@code order}, the sign of comparing the number with the bound. */
+            boolean holds(int order) {
+                return switch (this) {
+                    case AT_LEAST -> order >= 0;
+                    case AT_MOST -> order <= 0;
+                    case ABOVE -> order > 0;
+                    case BELOW -> order < 0;
+                };
+            }
+
+            /** As doubles: the operators, so that -0.0 and 0.0 are one number, as the reading has always had it. */
+            boolean holds(double value, double bound) {
+                return switch (this) {
+                    case AT_LEAST -> value >= bound;
+                    case AT_MOST -> value <= bound;
+                    case ABOVE -> value > bound;
+                    case BELOW -> value < bound;
+                };
+            }
         }
 
         static Test multipleOf(JsonNode value) throws UnknownForm {

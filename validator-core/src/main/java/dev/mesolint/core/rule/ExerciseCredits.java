@@ -2,38 +2,41 @@ package dev.mesolint.core.rule;
 
 import dev.mesolint.core.catalogue.Exercise;
 import dev.mesolint.core.catalogue.Muscle;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 
 /**
  * A catalogue entry's credited muscles as arrays by muscle ordinal, in the order the entry writes them, for the rules
- * that add credits up set by set (weekly sets per muscle): made once per exercise in a file by {@link FileIndex}, so
- * that a rule's walk over thousands of sets reads arrays instead of the entry's map.
+ * that add credits up set by set (weekly sets per muscle): made once per catalogue entry for the run
+ * ({@link FileIndex}), so that a rule's walk over thousands of sets reads arrays instead of the entry's map.
  */
 public final class ExerciseCredits {
     private final Exercise exercise;
     private final int[] ordinals;
     private final double[] credits;
     private final int[] primeMoverOrdinals;
+    private final List<Muscle> primeMovers;
 
     ExerciseCredits(Exercise exercise) {
         this.exercise = exercise;
         Map<Muscle, Double> muscles = exercise.muscles();
         ordinals = new int[muscles.size()];
         credits = new double[muscles.size()];
-        int primes = 0;
+        List<Muscle> movers = new ArrayList<>();
         int k = 0;
         for (Map.Entry<Muscle, Double> credit : muscles.entrySet()) {
             ordinals[k] = credit.getKey().ordinal();
             credits[k] = credit.getValue();
-            primes += credit.getValue() >= Exercise.PRIME_MOVER ? 1 : 0;
+            if (credit.getValue() >= Exercise.PRIME_MOVER) {
+                movers.add(credit.getKey());
+            }
             k++;
         }
-        primeMoverOrdinals = new int[primes];
-        int p = 0;
-        for (int i = 0; i < ordinals.length; i++) {
-            if (credits[i] >= Exercise.PRIME_MOVER) {
-                primeMoverOrdinals[p++] = ordinals[i];
-            }
+        primeMovers = List.copyOf(movers);
+        primeMoverOrdinals = new int[movers.size()];
+        for (int p = 0; p < primeMoverOrdinals.length; p++) {
+            primeMoverOrdinals[p] = movers.get(p).ordinal();
         }
     }
 
@@ -59,6 +62,11 @@ public final class ExerciseCredits {
     /** How many muscles the entry credits as prime mover (credit 1 or more). */
     public int primeMoverCount() {
         return primeMoverOrdinals.length;
+    }
+
+    /** The muscles credited as prime mover, in the order the entry writes them. */
+    public List<Muscle> primeMovers() {
+        return primeMovers;
     }
 
     /** The ordinal of the {@code p}-th prime mover. */

@@ -13,7 +13,6 @@ import dev.mesolint.core.model.SetMetrics;
 import dev.mesolint.core.model.WeekMetrics;
 import dev.mesolint.core.programme.Session;
 import dev.mesolint.core.programme.Week;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.List;
@@ -25,7 +24,6 @@ import java.util.Map;
  * Filled on first use, so a rule that asks nothing costs nothing. Confined to the thread that checks the file.
  */
 public final class FileIndex {
-    private static final List<Muscle> NO_MUSCLES = List.of();
     /** Each entry's credit arrays, shared by every file of the run. */
     private static final PerEntry<ExerciseCredits> CREDITS = new PerEntry<>(ExerciseCredits::new,
             ExerciseCredits::exercise);
@@ -34,7 +32,6 @@ public final class FileIndex {
     private final List<Week> weeks;
     private final ModelParameters parameters;
     private final List<WeekMetrics> figures;
-    private final Map<Exercise, List<Muscle>> primeMovers = new IdentityHashMap<>();
     private final Map<Session, List<RestGap>> rests = new IdentityHashMap<>();
     private Map<Integer, Week> weeksByNumber;
     private SetSummary sets;
@@ -91,18 +88,7 @@ public final class FileIndex {
 
     /** The muscles {@code exercise} credits as prime mover (credit 1 or more), in the order the entry writes them. */
     public List<Muscle> primeMovers(Exercise exercise) {
-        List<Muscle> movers = primeMovers.get(exercise);
-        if (movers == null) {
-            List<Muscle> found = new ArrayList<>();
-            for (Map.Entry<Muscle, Double> e : exercise.muscles().entrySet()) {
-                if (e.getValue() >= Exercise.PRIME_MOVER) {
-                    found.add(e.getKey());
-                }
-            }
-            movers = found.isEmpty() ? NO_MUSCLES : List.copyOf(found);
-            primeMovers.put(exercise, movers);
-        }
-        return movers;
+        return CREDITS.of(exercise).primeMovers();
     }
 
     /** The first written week numbered {@code number}; null when the programme writes none. */
